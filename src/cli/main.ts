@@ -1,0 +1,201 @@
+#!/usr/bin/env node
+/**
+ * The `stackday` command: a thin layer over the library (no physics here).
+ *
+ * Exit codes: 0 the run completed (whatever the verdicts); 2 bad input (scenario, weather file,
+ * options) or a run that could not be computed — nothing is written; 3 the run completed, a limit
+ * failed and --strict was given.
+ */
+import { Command, CommanderError, Option } from 'commander';
+import { resolve, join } from 'node:path';
+import { SingleBar, Presets } from 'cli-progress';
+import { loadScenarioFile, type LoadedScenario } from '../scenario/load.ts';
+import { ScenarioError } from '../scenario/errors.ts';
+import { scenarioJsonSchema } from '../scenario/schema.ts';
+import { SimulationError } from '../model/simulate.ts';
+import { describeMaterialsTable } from '../materials/index.ts';
+import { table } from '../results/console.ts';
+import { resultSheet } from '../results/console.ts';
+import { parseClockTime } from '../scenario/units.ts';
+import { runScenario, writeRun, VERSION } from '../index.ts';
+import type { ModelInputs } from '../model/inputs.ts';
+
+export const EXIT_OK = 0;
+export const EXIT_BAD_INPUT = 2;
+export const EXIT_LIMIT_FAILED = 3;
+
+class BadInput extends Error {}
+
+interface RunOptions {
+  out?: string;
+  integrator?: 'implicit' | 'rk45';
+  charts: boolean;
+  chartSize: string;
+  strict?: boolean;
+  quiet?: boolean;
+  json?: boolean;
+  firingStart?: string;
+  days?: string;
+}
+
+function parseChartSize(text: string): { width: number; height: number } {
+  const m = /^(\d{3,4})x(\d{3,4})$/.exec(text);
+  if (!m) throw new BadInput(`--chart-size: found "${text}"; expected WIDTHxHEIGHT in pixels, e.g. 1200x700 (100 to 9999)`);
+  return { width: Number(m[1]), height: Number(m[2]) };
+}
+
+/** Apply command-line overrides to the validated inputs. */
+function withOverrides(loaded: LoadedScenario, opts: RunOptions, mode: 'cycle' | 'warmup' | null): LoadedScenario {
+  let run = loaded.inputs.run;
+  if (opts.integrator) run = { ...run, integrator: opts.integrator };
+  if (opts.days !== undefined) {
+    const d = Number(opts.days);
+    if (!Number.isInteger(d) || d < 1 || d > 366) throw new BadInput(`--days: found "${opts.days}"; expected a whole number of days from 1 to 366`);
+    run = { ...run, length: { kind: 'days', days: d } };
+  }
+  if (mode === 'warmup') {
+    let start = run.firingStartClockS;
+    if (opts.firingStart !== undefined) {
+      const s = parseClockTime(opts.firingStart);
+      if (s === null) throw new BadInput(`--firing-start: found "${opts.firingStart}"; expected a local clock time "HH:MM"`);
+      start = s;
+    }
+    if (start === undefined) throw new BadInput('run.firing_start: missing; expected the local clock time "HH:MM" at which firing starts (or give --firing-start HH:MM)');
+    run = { ...run, mode: 'warmup', initial: 'cold', firingStartClockS: start, length: run.length.kind === 'days' ? run.length : { kind: 'days', days: 1 } };
+  }
+  const inputs: ModelInputs = { ...loaded.inputs, run };
+  return { ...loaded, inputs };
+}
+
+async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmup' | null): Promise<number> {
+  const chartSize = parseChartSize(opts.chartSize);
+  const loaded = withOverrides(loadScenarioFile(file), opts, mode);
+  const outDir = resolve(opts.out ?? join('out', loaded.inputs.name));
+  const showProgress = !opts.quiet && process.stderr.isTTY;
+  const bar = showProgress ? new SingleBar({ format: 'simulating |{bar}| {percentage}% ', stream: process.stderr, hideCursor: true }, Presets.shades_classic) : null;
+  bar?.start(100, 0);
+  let lastPct = -1;
+  let run;
+  try {
+    run = runScenario(loaded, {
+      onProgress: (f) => {
+        const pct = Math.floor(f * 100);
+        if (pct !== lastPct) {
+          lastPct = pct;
+          bar?.update(pct);
+        }
+      },
+    });
+  } finally {
+    bar?.stop();
+  }
+  await writeRun(run, outDir, { charts: opts.charts, chartWidth: chartSize.width, chartHeight: chartSize.height });
+  if (opts.json) process.stdout.write(`${JSON.stringify(run.summary, null, 2)}\n`);
+  else if (!opts.quiet) process.stdout.write(`${resultSheet(run.summary, outDir).join('\n')}\n`);
+  if (opts.strict && !run.summary.all_limits_pass) {
+    const failed = run.summary.verdicts.filter((v) => v.status === 'fail').map((v) => v.limit);
+    process.stderr.write(`stackday: --strict: limit(s) failed: ${failed.join(', ')}\n`);
+    return EXIT_LIMIT_FAILED;
+  }
+  return EXIT_OK;
+}
+
+function addRunOptions(cmd: Command): Command {
+  return cmd
+    .option('-o, --out <dir>', 'output folder (default: out/<scenario name>/)')
+    .addOption(new Option('--integrator <name>', 'time integrator: implicit (TR-BDF2, default) or rk45 (Dormand–Prince reference)').choices(['implicit', 'rk45']))
+    .option('--days <n>', 'simulate this many days (overrides run.days)')
+    .option('--no-charts', 'skip the PNG charts and report.html')
+    .option('--chart-size <WxH>', 'chart size in pixels', '1000x600')
+    .option('--strict', 'exit with code 3 when any limit fails')
+    .option('-q, --quiet', 'print nothing but errors')
+    .option('--json', 'print summary.json to standard output instead of the result sheet');
+}
+
+export function buildProgram(): Command {
+  const program = new Command();
+  program
+    .name('stackday')
+    .description('Simulate the layered wall of a tall stack through the day: temperatures of every layer, dew-point margins, peaks and verdicts.')
+    .version(VERSION, '-V, --version')
+    .showHelpAfterError('(run with --help for usage)')
+    .exitOverride();
+
+  addRunOptions(program.command('run').argument('<scenario>', 'scenario file (YAML or JSON)').description('run a scenario (daily cycle or warm-up, as the file says) and write the results')).action(
+    async (file: string, opts: RunOptions) => {
+      process.exitCode = await runCommand(file, opts, null);
+    },
+  );
+  addRunOptions(
+    program
+      .command('warmup')
+      .argument('<scenario>', 'scenario file (YAML or JSON)')
+      .description('warm-up study: the wall starts cold at air temperature and firing starts at run.firing_start (or --firing-start)')
+      .option('--firing-start <HH:MM>', 'local clock time at which firing starts'),
+  ).action(async (file: string, opts: RunOptions) => {
+    process.exitCode = await runCommand(file, opts, 'warmup');
+  });
+  program
+    .command('check')
+    .argument('<scenario>', 'scenario file (YAML or JSON)')
+    .description('validate a scenario file and report every problem, without running it')
+    .action((file: string) => {
+      const loaded = loadScenarioFile(file);
+      process.stdout.write(`${file}: valid scenario "${loaded.inputs.name}" (${loaded.inputs.layers.length} layers, ${loaded.inputs.stack.segments} segments)\n`);
+    });
+  program
+    .command('schema')
+    .description('print the JSON Schema of scenario files (for editor completion and checking)')
+    .action(() => {
+      process.stdout.write(`${JSON.stringify(scenarioJsonSchema(), null, 2)}\n`);
+    });
+  program
+    .command('materials')
+    .description('list the wall materials in the library')
+    .option('--json', 'print the library as JSON')
+    .action(async (opts: { json?: boolean }) => {
+      if (opts.json) {
+        const { MATERIALS } = await import('../materials/index.ts');
+        process.stdout.write(`${JSON.stringify(MATERIALS, null, 2)}\n`);
+        return;
+      }
+      const rows = describeMaterialsTable();
+      process.stdout.write(`${table(rows).join('\n')}\n`);
+    });
+  return program;
+}
+
+/** Run the command line; returns the exit code. Errors become one clear message each, never a stack trace. */
+export async function main(argv: readonly string[]): Promise<number> {
+  const program = buildProgram();
+  try {
+    await program.parseAsync(argv as string[], { from: 'user' });
+    return typeof process.exitCode === 'number' ? process.exitCode : EXIT_OK;
+  } catch (e) {
+    if (e instanceof CommanderError) {
+      if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help') return EXIT_OK;
+      return EXIT_BAD_INPUT; // commander has printed its message
+    }
+    if (e instanceof ScenarioError) {
+      process.stderr.write(`stackday: ${e.message}\n`);
+      return EXIT_BAD_INPUT;
+    }
+    if (e instanceof BadInput) {
+      process.stderr.write(`stackday: ${e.message}\n`);
+      return EXIT_BAD_INPUT;
+    }
+    if (e instanceof SimulationError) {
+      process.stderr.write(`stackday: the run could not be computed: ${e.message}\nNothing was written. Check the scenario for extreme values, or tighten run.relative_tolerance.\n`);
+      return EXIT_BAD_INPUT;
+    }
+    process.stderr.write(`stackday: unexpected error: ${(e as Error).message ?? String(e)}\n`);
+    return 1;
+  }
+}
+
+const invokedDirectly = process.argv[1] !== undefined && /(?:cli[\\/]main\.ts|bin[\\/]stackday(?:\.js)?)$/.test(process.argv[1]);
+if (invokedDirectly) {
+  main(process.argv.slice(2)).then((code) => {
+    process.exitCode = code;
+  });
+}

@@ -1,0 +1,125 @@
+/**
+ * Boundary drivers at one instant: outside air, wind, sky, sun and firing. Everything here depends
+ * on time only (not on the wall state), so it is evaluated once per instant and shared by every
+ * segment and every Newton iteration at that instant.
+ */
+import type { ModelInputs } from './inputs.ts';
+import type { SiteClock } from '../sun/clock.ts';
+import type { WeatherSource } from '../weather/types.ts';
+import type { FiringSchedule } from '../flue/schedule.ts';
+import { solarAt, absorbedSunPerMetre } from '../sun/irradiance.ts';
+import { SECONDS_PER_DAY } from '../properties/constants.ts';
+import { skyTemperatureSwinbank, skyEmissivityBerdahlMartin, skyEmissivityCloudCorrection, skyTemperatureFromEmissivity } from '../correlations/radiation.ts';
+
+export interface Drivers {
+  t: number;
+  airTemperatureK: number;
+  /** Wind speed at the weather's reference height, m/s. */
+  windSpeedRef: number;
+  cloudCover: number;
+  skyTemperatureK: number;
+  groundTemperatureK: number;
+  sunAltitudeDeg: number;
+  sunAzimuthDeg: number;
+  beamNormal: number;
+  diffuseHorizontal: number;
+  /** Absorbed sun per metre of height, W/m (circumferential mean; same at every height). */
+  sunPerMetre: number;
+  inletTemperatureK: number;
+  massFlow: number;
+  firing: boolean;
+}
+
+export interface DriverContext {
+  readonly inputs: ModelInputs;
+  readonly clock: SiteClock;
+  readonly weather: WeatherSource;
+  readonly schedule: FiringSchedule;
+  readonly outerDiameter: number;
+  /** Warm-up: run time of firing start; before it the flue is cold and idle. */
+  readonly firingStartT?: number;
+  /** Mass flow while idle, kg/s. */
+  readonly idleMassFlow: number;
+  /** Repeat the first day's drivers every day (periodic studies): drivers at t are those at t mod 1 day. */
+  readonly repeatFirstDay: boolean;
+}
+
+/** The instant whose drivers apply at run time t (t itself, or its time of day on the first day). */
+export function driverTime(ctx: DriverContext, t: number): number {
+  return ctx.repeatFirstDay ? t - Math.floor(t / SECONDS_PER_DAY + 1e-12) * SECONDS_PER_DAY : t;
+}
+
+/** Fill `out` with the drivers at run time t. */
+export function evaluateDrivers(ctx: DriverContext, tRun: number, out: Drivers): Drivers {
+  const { inputs, clock } = ctx;
+  const t = driverTime(ctx, tRun);
+  const utcMs = clock.utcMs(t);
+  const air = ctx.weather.at(utcMs);
+  out.t = tRun;
+  out.airTemperatureK = air.airTemperatureK;
+  out.windSpeedRef = air.windSpeed;
+  out.cloudCover = air.cloudCover;
+
+  const rad = inputs.outside.radiation;
+  if (rad.kind === 'sky-ground') {
+    if (rad.sky === 'swinbank') out.skyTemperatureK = skyTemperatureSwinbank(air.airTemperatureK);
+    else {
+      const eps = skyEmissivityCloudCorrection(skyEmissivityBerdahlMartin(air.dewPointK), air.cloudCover);
+      out.skyTemperatureK = skyTemperatureFromEmissivity(Math.min(1, eps), air.airTemperatureK);
+    }
+    out.groundTemperatureK = rad.groundTemperatureK ?? air.airTemperatureK;
+  } else if (rad.kind === 'surroundings') {
+    out.skyTemperatureK = rad.temperatureK;
+    out.groundTemperatureK = rad.temperatureK;
+  } else {
+    out.skyTemperatureK = air.airTemperatureK;
+    out.groundTemperatureK = air.airTemperatureK;
+  }
+
+  const sun = solarAt(utcMs, inputs.site, air);
+  out.sunAltitudeDeg = sun.altitudeDeg;
+  out.sunAzimuthDeg = sun.azimuthDeg;
+  out.beamNormal = sun.beamNormal;
+  out.diffuseHorizontal = sun.diffuseHorizontal;
+  out.sunPerMetre = inputs.outside.sun
+    ? absorbedSunPerMetre({
+        beamNormal: sun.beamNormal,
+        diffuseHorizontal: sun.diffuseHorizontal,
+        altitudeDeg: sun.altitudeDeg,
+        outerDiameter: ctx.outerDiameter,
+        solarAbsorptance: inputs.surface.solarAbsorptance,
+        groundReflectance: inputs.site.groundReflectance,
+      }).total
+    : 0;
+
+  if (ctx.firingStartT !== undefined && t < ctx.firingStartT) {
+    out.inletTemperatureK = air.airTemperatureK;
+    out.massFlow = ctx.idleMassFlow;
+    out.firing = false;
+  } else {
+    const f = ctx.schedule.at(clock.dayIndex(t), clock.localSecondsOfDay(t));
+    out.inletTemperatureK = f.inletTemperatureK;
+    out.massFlow = f.massFlow;
+    out.firing = f.firing;
+  }
+  return out;
+}
+
+export function emptyDrivers(): Drivers {
+  return {
+    t: Number.NaN,
+    airTemperatureK: 0,
+    windSpeedRef: 0,
+    cloudCover: 0,
+    skyTemperatureK: 0,
+    groundTemperatureK: 0,
+    sunAltitudeDeg: 0,
+    sunAzimuthDeg: 0,
+    beamNormal: 0,
+    diffuseHorizontal: 0,
+    sunPerMetre: 0,
+    inletTemperatureK: 0,
+    massFlow: 0,
+    firing: false,
+  };
+}

@@ -1,0 +1,147 @@
+/**
+ * Validated model inputs: everything the simulator needs, in SI units and kelvin, with no unit
+ * strings and no optional ambiguity left. The scenario module produces this from a file; library
+ * users may build it directly. Nothing in here refers back to the scenario file format.
+ */
+import type { Material } from '../materials/types.ts';
+import type { WeatherSource } from '../weather/types.ts';
+
+export interface SiteInput {
+  readonly name: string;
+  readonly latitudeDeg: number;
+  readonly longitudeDeg: number;
+  readonly elevationM: number;
+  /** IANA time zone. */
+  readonly timeZone: string;
+  /** First day of the run, local date `YYYY-MM-DD`. */
+  readonly startDate: string;
+  /** Ground solar reflectance (albedo), 0–1. */
+  readonly groundReflectance: number;
+  /** Wind power-law exponent α for the site's terrain. */
+  readonly windExponent: number;
+}
+
+export interface StackInput {
+  readonly height: number;
+  readonly innerDiameter: number;
+  readonly segments: number;
+}
+
+export interface LayerInput {
+  /** Label for reports, e.g. `liner`, `insulation`, `shell`. */
+  readonly label: string;
+  readonly material: Material;
+  readonly thickness: number;
+  /** Cells across the layer, or `auto` (sized to the daily penetration depth). Ignored for gaps. */
+  readonly cells: number | 'auto';
+  /** Contact resistance to the next layer outward, m² K/W (0 = perfect contact). */
+  readonly contactResistanceToNext: number;
+}
+
+export interface SurfaceInput {
+  readonly emissivity: number;
+  readonly solarAbsorptance: number;
+}
+
+export interface OutsideInput {
+  /** Fixed outside film coefficient, W/(m² K); undefined = correlations (Churchill–Bernstein / Churchill–Chu, mixed). */
+  readonly filmCoefficient?: number;
+  /** Radiation exchange: to half sky and half ground, or to surroundings at a fixed temperature, or none. */
+  readonly radiation: { readonly kind: 'sky-ground'; readonly sky: 'swinbank' | 'berdahl-martin'; readonly groundTemperatureK?: number }
+    | { readonly kind: 'surroundings'; readonly temperatureK: number }
+    | { readonly kind: 'none' };
+  /** Whether absorbed sun is applied. */
+  readonly sun: boolean;
+}
+
+export type WeatherInput =
+  | {
+      readonly kind: 'design-day';
+      readonly minAirTemperatureK: number;
+      readonly maxAirTemperatureK: number;
+      readonly windSpeed: number;
+      /** Fractional daily amplitude of the wind speed (0 = steady). */
+      readonly windDailyAmplitude: number;
+      readonly referenceHeightM: number;
+      readonly cloudCover: number;
+      readonly dewPointK: number;
+    }
+  | { readonly kind: 'file'; readonly fileName: string; readonly text: string; readonly referenceHeightM: number }
+  /** Any weather source built in code (library use, tests). */
+  | { readonly kind: 'source'; readonly source: WeatherSource };
+
+export interface FiringPointInput {
+  /** Local clock time, s after midnight. */
+  readonly clockS: number;
+  readonly inletTemperatureK: number;
+  /** kg/s. */
+  readonly massFlow: number;
+}
+
+export interface GasCompositionInput {
+  /** Mole (volume) fractions of the wet flue gas, summing to 1. */
+  readonly N2: number;
+  readonly O2: number;
+  readonly CO2: number;
+  readonly H2O: number;
+  readonly SO2: number;
+  readonly SO3: number;
+}
+
+export interface FlueInput {
+  /** Firing points for every day (`daily`) or in turn per day (`perDay`). */
+  readonly schedule: { readonly daily: readonly FiringPointInput[] } | { readonly perDay: readonly (readonly FiringPointInput[])[] };
+  /** Mass flow floor while off (natural draft), kg/s. */
+  readonly offMassFlow?: number;
+  readonly composition: GasCompositionInput;
+  /** Gas properties: the mixture's, or air's. */
+  readonly properties: 'mixture' | 'air';
+  /** Fixed inside film coefficient, W/(m² K); undefined = Gnielinski / laminar blend. */
+  readonly filmCoefficient?: number;
+  /** Whether the gas cools as it rises (false: every segment sees the inlet temperature). */
+  readonly gasCooling: boolean;
+  /** Absolute pressure in the flue, Pa. */
+  readonly pressurePa: number;
+}
+
+export interface RunInput {
+  /** `cycle`: daily cycling study; `warmup`: cold wall, firing starts at `firingStartClockS`. */
+  readonly mode: 'cycle' | 'warmup';
+  /** Fixed number of days, or repeat until periodic. */
+  readonly length: { readonly kind: 'days'; readonly days: number } | { readonly kind: 'until-periodic'; readonly toleranceK: number; readonly maxDays: number };
+  /** Output interval, s. */
+  readonly outputInterval: number;
+  /** Initial wall state. */
+  readonly initial: 'steady-daily-mean' | 'steady-at-start' | 'cold';
+  readonly integrator: 'implicit' | 'rk45';
+  readonly rtol: number;
+  readonly atol: number;
+  /** Warm-up: local clock time at which firing starts on day 0, s. */
+  readonly firingStartClockS?: number;
+}
+
+export interface LimitsInput {
+  /** Shell (outer surface) touch limit, K. */
+  readonly shellTouchK?: number;
+  /** Lining (innermost layer) service limit, K; default: the lining material's maximum service temperature. */
+  readonly liningServiceK?: number;
+  /** Allowable thermal stress, Pa. */
+  readonly allowableStressPa?: number;
+  /** Required margin of the inner surface above the acid dew point, K. */
+  readonly acidDewMarginK?: number;
+  /** Required margin of the inner surface above the water dew point, K. */
+  readonly waterDewMarginK?: number;
+}
+
+export interface ModelInputs {
+  readonly name: string;
+  readonly site: SiteInput;
+  readonly stack: StackInput;
+  readonly layers: readonly LayerInput[];
+  readonly surface: SurfaceInput;
+  readonly outside: OutsideInput;
+  readonly weather: WeatherInput;
+  readonly flue: FlueInput;
+  readonly run: RunInput;
+  readonly limits: LimitsInput;
+}

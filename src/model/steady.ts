@@ -1,0 +1,67 @@
+/**
+ * Steady state of the wall model: the state where dT/dt = 0, found by damped Newton iteration with
+ * the tridiagonal Jacobian (the weak coupling of each segment's inlet gas temperature to the walls
+ * below is left out of the Jacobian, so convergence is fast-linear rather than quadratic), with a
+ * pseudo-transient fallback on the implicit integrator if Newton stalls.
+ */
+import type { OdeSystem } from '../solver/types.ts';
+import { solveTridiagonal } from '../solver/tridiagonal.ts';
+import { INTEGRATORS } from '../solver/index.ts';
+
+export interface SteadyOptions {
+  /** Converged when every Newton update is below this, K. */
+  readonly toleranceK: number;
+  readonly maxIterations: number;
+}
+
+/** Largest |x_i|. */
+function maxAbs(x: Float64Array): number {
+  let m = 0;
+  for (let i = 0; i < x.length; i++) m = Math.max(m, Math.abs(x[i]!));
+  return m;
+}
+
+/** Solve f(y) = 0 for the system's rhs, starting at `guess`. Returns the steady state. */
+export function steadyState(system: OdeSystem, guess: Float64Array, options: SteadyOptions = { toleranceK: 1e-6, maxIterations: 200 }): Float64Array {
+  if (!system.jacobian) throw new Error('steadyState needs a system with a Jacobian');
+  const n = system.size;
+  const y = Float64Array.from(guess);
+  const trial = new Float64Array(n);
+  const f = new Float64Array(n);
+  const fTrial = new Float64Array(n);
+  const aux = new Float64Array(system.auxSize);
+  const lower = new Float64Array(n);
+  const diag = new Float64Array(n);
+  const upper = new Float64Array(n);
+  const delta = new Float64Array(n);
+  const scratch = new Float64Array(n);
+  const rhs = new Float64Array(n);
+  system.rhs(0, y, f, aux);
+  let residual = maxAbs(f);
+  for (let it = 0; it < options.maxIterations; it++) {
+    system.jacobian(0, y, lower, diag, upper);
+    for (let i = 0; i < n; i++) rhs[i] = -f[i]!;
+    solveTridiagonal(lower, diag, upper, rhs, delta, scratch);
+    // damp: no node moves more than 200 K in one iteration; halve while the residual grows
+    let lambda = Math.min(1, 200 / Math.max(1e-300, maxAbs(delta)));
+    let accepted = false;
+    for (let k = 0; k < 12; k++) {
+      for (let i = 0; i < n; i++) trial[i] = y[i]! + lambda * delta[i]!;
+      system.rhs(0, trial, fTrial, aux);
+      const r = maxAbs(fTrial);
+      if (Number.isFinite(r) && (r < residual || k === 11)) {
+        accepted = Number.isFinite(r);
+        residual = r;
+        break;
+      }
+      lambda /= 2;
+    }
+    if (!accepted) break;
+    y.set(trial);
+    f.set(fTrial);
+    if (lambda * maxAbs(delta) < options.toleranceK) return y;
+  }
+  // fallback: march the frozen-time problem to steady state with the L-stable integrator
+  const res = INTEGRATORS.implicit(system, y, 0, [1e5, 1e6, 1e7, 1e8, 1e9], { rtol: 1e-7, atol: 1e-5 });
+  return Float64Array.from(res.y);
+}

@@ -1,0 +1,293 @@
+/**
+ * The semi-discrete wall model of the whole stack as an ODE system C(T) dT/dt = f(t, T)
+ * (design.md sections 2–4), in the form the integrators take: dT/dt = f / C.
+ *
+ * Unknowns: node temperatures, segment by segment from the bottom (index s·n + i). Flue side: the
+ * gas marches up quasi-steadily, each segment taking heat ṁ c_p (T_in − T_out) with
+ * T_out = T_w + (T_in − T_w) exp(−h π D Δz / (ṁ c_p)). Outside: convection, radiation to sky and
+ * ground, absorbed sun. Quadrature channels (W, whole stack): heat from the gas into the wall,
+ * outside convection, outside radiation, absorbed sun.
+ */
+import type { OdeSystem } from '../solver/types.ts';
+import type { ModelInputs } from './inputs.ts';
+import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../wall/mesh.ts';
+import { gapConductancePerMetre } from '../wall/gap.ts';
+import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
+import { airPropertiesAt, airPropertiesInto } from '../properties/air.ts';
+import { outsideFilmCoefficient } from '../correlations/external.ts';
+import { nuPipeBlended } from '../correlations/internal.ts';
+import { STEFAN_BOLTZMANN } from '../properties/constants.ts';
+import type { GasPropertyLookup } from '../properties/flueGas.ts';
+
+export const AUX_GAS_TO_WALL = 0;
+export const AUX_CONVECTION = 1;
+export const AUX_RADIATION = 2;
+export const AUX_SUN = 3;
+export const AUX_SIZE = 4;
+
+/** Per-segment quantities at one instant (W per metre of height, K, W/(m² K), m/s). */
+export interface SegmentDiagnostics {
+  gasInK: Float64Array;
+  gasOutK: Float64Array;
+  insideFilm: Float64Array;
+  gasToWallPerMetre: Float64Array;
+  windAtHeight: Float64Array;
+  outsideFilm: Float64Array;
+  convectionPerMetre: Float64Array;
+  radiationPerMetre: Float64Array;
+  sunPerMetre: Float64Array;
+  reynoldsInside: Float64Array;
+}
+
+export function makeSegmentDiagnostics(segments: number): SegmentDiagnostics {
+  const f = () => new Float64Array(segments);
+  return {
+    gasInK: f(),
+    gasOutK: f(),
+    insideFilm: f(),
+    gasToWallPerMetre: f(),
+    windAtHeight: f(),
+    outsideFilm: f(),
+    convectionPerMetre: f(),
+    radiationPerMetre: f(),
+    sunPerMetre: f(),
+    reynoldsInside: f(),
+  };
+}
+
+export interface StackGeometry {
+  readonly segments: number;
+  readonly segmentLength: number;
+  /** Mid-height of each segment, m. */
+  readonly midHeight: Float64Array;
+  /** Power-law wind factor (z/z_ref)^α of each segment. */
+  readonly windFactor: Float64Array;
+  readonly innerDiameter: number;
+  readonly outerDiameter: number;
+}
+
+export class StackWallSystem implements OdeSystem {
+  readonly size: number;
+  readonly auxSize = AUX_SIZE;
+  readonly n: number;
+  private readonly drivers: Drivers = emptyDrivers();
+  private readonly conductance: Float64Array;
+  private readonly capacity: Float64Array;
+  private readonly innerSink: Float64Array; // ∂q'_in/∂T_0 per segment (≤ 0)
+  private readonly outerSink: Float64Array; // ∂q'_out/∂T_N per segment (≥ 0, heat leaving)
+  /** When set, the rhs is the mean over these instants (steady state at daily-mean conditions). */
+  meanOver: readonly number[] | null = null;
+  private readonly scratch: Float64Array;
+  private readonly scratchAux: Float64Array;
+  private readonly film = airPropertiesAt(300);
+  /** Fingerprint of the last state passed to `evaluate` (its sinks are reused by `jacobian`). */
+  private lastT = Number.NaN;
+  private lastSum = Number.NaN;
+
+  constructor(
+    readonly inputs: ModelInputs,
+    readonly mesh: WallMesh,
+    readonly geometry: StackGeometry,
+    readonly ctx: DriverContext,
+    readonly gas: GasPropertyLookup,
+  ) {
+    this.n = mesh.nodeCount;
+    this.size = this.n * geometry.segments;
+    this.conductance = new Float64Array(Math.max(1, this.n - 1));
+    this.capacity = new Float64Array(this.n);
+    this.innerSink = new Float64Array(geometry.segments);
+    this.outerSink = new Float64Array(geometry.segments);
+    this.scratch = new Float64Array(this.size);
+    this.scratchAux = new Float64Array(AUX_SIZE);
+  }
+
+  /** Conductances per metre of height of the links of the segment whose nodes start at offset o. */
+  private fillConductances(y: Float64Array, o: number): void {
+    const mesh = this.mesh;
+    for (let i = 0; i < this.n - 1; i++) {
+      const ta = y[o + i]!;
+      const tb = y[o + i + 1]!;
+      const kind = mesh.linkKind[i];
+      this.conductance[i] =
+        kind === LINK_CONDUCTION
+          ? mesh.linkGeometry[i]! * mesh.linkConductivity[i]!(0.5 * (ta + tb))
+          : kind === LINK_CONTACT
+            ? mesh.linkGeometry[i]!
+            : gapConductancePerMetre(mesh.linkGap[i]!, ta, tb);
+    }
+  }
+
+  driversAt(t: number): Drivers {
+    if (this.drivers.t !== t) evaluateDrivers(this.ctx, t, this.drivers);
+    return this.drivers;
+  }
+
+  rhs(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array): void {
+    if (!this.meanOver) {
+      this.evaluate(t, y, dydt, aux, null);
+      return;
+    }
+    dydt.fill(0);
+    aux.fill(0);
+    const m = this.meanOver.length;
+    for (const tk of this.meanOver) {
+      this.evaluate(tk, y, this.scratch, this.scratchAux, null);
+      for (let i = 0; i < this.size; i++) dydt[i] += this.scratch[i]! / m;
+      for (let i = 0; i < AUX_SIZE; i++) aux[i] += this.scratchAux[i]! / m;
+    }
+  }
+
+  /** dT/dt, quadrature rates and (optionally) per-segment diagnostics at (t, y). */
+  evaluate(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array, diag: SegmentDiagnostics | null): void {
+    const d = this.driversAt(t);
+    const { mesh, geometry, inputs } = this;
+    const n = this.n;
+    const dz = geometry.segmentLength;
+    const di = geometry.innerDiameter;
+    const dOut = geometry.outerDiameter;
+    const flue = inputs.flue;
+    const outside = inputs.outside;
+    const eps = inputs.surface.emissivity;
+    const massFlow = d.massFlow;
+    let gasIn = d.inletTemperatureK;
+    let qGas = 0;
+    let qConv = 0;
+    let qRad = 0;
+    let qSun = 0;
+
+    for (let s = 0; s < geometry.segments; s++) {
+      const o = s * n;
+      // --- conduction links and capacities ---
+      this.fillConductances(y, o);
+      for (let i = 0; i < n; i++) {
+        this.capacity[i] = nodeCapacity(mesh, i, y[o + i]!);
+        dydt[o + i] = 0;
+      }
+      for (let i = 0; i < n - 1; i++) {
+        const q = this.conductance[i]! * (y[o + i]! - y[o + i + 1]!);
+        dydt[o + i] -= q;
+        dydt[o + i + 1] += q;
+      }
+
+      // --- flue side ---
+      const tw = y[o]!;
+      const props = this.gas(gasIn);
+      const reynolds = (4 * massFlow) / (Math.PI * di * props.dynamicViscosity);
+      const hIn = flue.filmCoefficient ?? (nuPipeBlended(reynolds, props.prandtl) * props.conductivity) / di;
+      let qIn: number;
+      let gasOut: number;
+      if (flue.gasCooling) {
+        const capacityRate = massFlow * props.specificHeat;
+        const ntu = (hIn * Math.PI * di * dz) / capacityRate;
+        const effectiveness = -Math.expm1(-ntu);
+        gasOut = gasIn - (gasIn - tw) * effectiveness;
+        qIn = (capacityRate * (gasIn - gasOut)) / dz;
+        this.innerSink[s] = (capacityRate * effectiveness) / dz;
+      } else {
+        gasOut = gasIn;
+        qIn = hIn * Math.PI * di * (gasIn - tw);
+        this.innerSink[s] = hIn * Math.PI * di;
+      }
+      dydt[o] += qIn;
+
+      // --- outside ---
+      const ts = y[o + n - 1]!;
+      const wind = d.windSpeedRef * geometry.windFactor[s]!;
+      let hOut: number;
+      if (outside.filmCoefficient !== undefined) hOut = outside.filmCoefficient;
+      else {
+        const air = airPropertiesInto(this.film, 0.5 * (ts + d.airTemperatureK));
+        hOut = outsideFilmCoefficient(
+          { windSpeed: wind, outerDiameter: dOut, height: inputs.stack.height, surfaceTemperatureK: ts, airTemperatureK: d.airTemperatureK },
+          air,
+        ).h;
+      }
+      const qc = hOut * Math.PI * dOut * (ts - d.airTemperatureK);
+      let qr = 0;
+      let hr = 0;
+      const ts3 = ts * ts * ts;
+      if (outside.radiation.kind === 'sky-ground') {
+        const tk = d.skyTemperatureK;
+        const tg = d.groundTemperatureK;
+        qr = eps * STEFAN_BOLTZMANN * (ts3 * ts - 0.5 * (tk * tk * tk * tk + tg * tg * tg * tg)) * Math.PI * dOut;
+        hr = 4 * eps * STEFAN_BOLTZMANN * ts3 * Math.PI * dOut;
+      } else if (outside.radiation.kind === 'surroundings') {
+        const tk = d.skyTemperatureK;
+        qr = eps * STEFAN_BOLTZMANN * (ts3 * ts - tk * tk * tk * tk) * Math.PI * dOut;
+        hr = 4 * eps * STEFAN_BOLTZMANN * ts3 * Math.PI * dOut;
+      }
+      const qs = d.sunPerMetre;
+      dydt[o + n - 1] += qs - qc - qr;
+      this.outerSink[s] = hOut * Math.PI * dOut + hr;
+
+      for (let i = 0; i < n; i++) dydt[o + i] /= this.capacity[i]!;
+
+      qGas += qIn * dz;
+      qConv += qc * dz;
+      qRad += qr * dz;
+      qSun += qs * dz;
+      if (diag) {
+        diag.gasInK[s] = gasIn;
+        diag.gasOutK[s] = gasOut;
+        diag.insideFilm[s] = hIn;
+        diag.gasToWallPerMetre[s] = qIn;
+        diag.windAtHeight[s] = wind;
+        diag.outsideFilm[s] = hOut;
+        diag.convectionPerMetre[s] = qc;
+        diag.radiationPerMetre[s] = qr;
+        diag.sunPerMetre[s] = qs;
+        diag.reynoldsInside[s] = reynolds;
+      }
+      gasIn = gasOut;
+    }
+    this.lastT = t;
+    this.lastSum = fingerprint(y);
+    aux[AUX_GAS_TO_WALL] = qGas;
+    aux[AUX_CONVECTION] = qConv;
+    aux[AUX_RADIATION] = qRad;
+    aux[AUX_SUN] = qSun;
+  }
+
+  /**
+   * Tridiagonal Jacobian of dT/dt: conduction with conductances frozen at the current state, the
+   * local flue-side and outside sinks on the surface nodes. The dependence of a segment's inlet gas
+   * temperature on the walls below is left out (it only slows Newton a little).
+   */
+  jacobian(t: number, y: Float64Array, lower: Float64Array, diag: Float64Array, upper: Float64Array): void {
+    // Refresh conductances, capacities and sinks at this state (evaluate fills them per segment,
+    // so run it segment-consistently by evaluating once and rebuilding per segment below).
+    const n = this.n;
+    const tmp = this.scratch;
+    const aux = this.scratchAux;
+    const saved = this.meanOver;
+    const tEval = saved ? saved[Math.floor(saved.length / 2)]! : t;
+    if (!(this.lastT === tEval && this.lastSum === fingerprint(y))) {
+      this.meanOver = null;
+      this.evaluate(tEval, y, tmp, aux, null); // fills innerSink / outerSink
+      this.meanOver = saved;
+    }
+    const { mesh, geometry } = this;
+    for (let s = 0; s < geometry.segments; s++) {
+      const o = s * n;
+      this.fillConductances(y, o);
+      for (let i = 0; i < n; i++) {
+        const c = nodeCapacity(mesh, i, y[o + i]!);
+        const gl = i > 0 ? this.conductance[i - 1]! : 0;
+        const gu = i < n - 1 ? this.conductance[i]! : 0;
+        let dd = -(gl + gu);
+        if (i === 0) dd -= this.innerSink[s]!;
+        if (i === n - 1) dd -= this.outerSink[s]!;
+        lower[o + i] = i > 0 ? gl / c : 0;
+        upper[o + i] = i < n - 1 ? gu / c : 0;
+        diag[o + i] = dd / c;
+      }
+    }
+  }
+}
+
+/** A cheap fingerprint of a state vector (position-weighted sum), to recognise a repeated state. */
+function fingerprint(y: Float64Array): number {
+  let s = 0;
+  for (let i = 0; i < y.length; i++) s += y[i]! * (i + 1);
+  return s;
+}

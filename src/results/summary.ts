@@ -1,0 +1,150 @@
+/**
+ * The machine-readable result of a run (summary.json) and its types. Field names state their unit.
+ * Temperatures in °C, differences in K, stresses in MPa, energies in kWh, times as ISO local time.
+ */
+
+export type VerdictStatus = 'pass' | 'fail' | 'not-set';
+
+export interface Verdict {
+  /** Which limit: shell_touch, lining_service, allowable_stress, acid_dew_margin, water_dew_margin. */
+  readonly limit: string;
+  /** Plain words for the limit. */
+  readonly title: string;
+  readonly status: VerdictStatus;
+  /** The limit as set (null when not set). */
+  readonly limit_value: number | null;
+  /** The figure that governs the verdict. */
+  readonly governing_value: number | null;
+  /** Unit of limit_value and governing_value. */
+  readonly unit: string;
+  /** When and where the governing figure occurs. */
+  readonly time_local: string | null;
+  readonly height_m: number | null;
+  /** One sentence saying what was compared. */
+  readonly detail: string;
+}
+
+export interface Extreme {
+  readonly value_c: number;
+  readonly time_local: string;
+  readonly height_m: number;
+}
+
+export interface PositionRange {
+  /** inner_surface, interface_1, …, outer_surface. */
+  readonly position: string;
+  readonly radius_m: number;
+  readonly min_c: number;
+  readonly max_c: number;
+  /** Largest daily swing (max − min) at any height, K. */
+  readonly swing_k: number;
+  /** Height where the largest swing occurs. */
+  readonly swing_height_m: number;
+}
+
+export interface LayerSummary {
+  readonly label: string;
+  readonly material: string;
+  readonly kind: 'solid' | 'gap';
+  readonly thickness_mm: number;
+  readonly min_c: number;
+  readonly max_c: number;
+  readonly swing_k: number;
+  /** Largest temperature difference across the layer, K, with its time and height. */
+  readonly max_delta_t_k: number;
+  readonly max_delta_t_time: string;
+  readonly max_delta_t_height_m: number;
+  /** Thermal-stress indicator E α ΔT / (2(1 − ν)), MPa (null for gaps and materials without elastic data). */
+  readonly stress_indicator_mpa: number | null;
+  readonly max_service_c: number | null;
+}
+
+export interface HeightHours {
+  readonly height_m: number;
+  readonly hours: number;
+}
+
+export interface WarmupAtHeight {
+  readonly height_m: number;
+  /** Minutes from firing start until the inner surface stays above the water dew point plus margin (null: not within the run). */
+  readonly minutes_to_water_dew: number | null;
+  readonly minutes_to_acid_dew: number | null;
+  /** Minutes until the outer surface has risen 90 % of its rise over the run. */
+  readonly minutes_to_shell_90_percent: number | null;
+  /** Minutes until the outer surface first passes the touch limit (null: never, or no limit set). */
+  readonly minutes_to_shell_touch: number | null;
+}
+
+export interface Summary {
+  readonly tool: { readonly name: 'stackday'; readonly version: string };
+  readonly scenario: { readonly name: string; readonly description: string | null; readonly site: string; readonly first_day: string; readonly time_zone: string };
+  readonly run: {
+    readonly mode: 'cycle' | 'warmup';
+    readonly days_simulated: number;
+    /** Which instants the figures below cover. */
+    readonly evaluated_over: string;
+    readonly periodic_requested: boolean;
+    readonly periodic_reached: boolean | null;
+    readonly periodic_last_change_k: number | null;
+    readonly periodic_tolerance_k: number | null;
+    readonly periodic_change_by_day_k: readonly number[];
+    readonly integrator: string;
+    readonly steps: number;
+    readonly compute_ms: number;
+    readonly output_interval_min: number;
+    readonly segments: number;
+    readonly nodes_per_segment: number;
+  };
+  readonly verdicts: readonly Verdict[];
+  readonly all_limits_pass: boolean;
+  readonly peak_shell_c: number;
+  readonly peak_shell_time: string;
+  readonly peak_shell_height_m: number;
+  readonly peak_lining_c: number;
+  readonly peak_lining_time: string;
+  readonly peak_lining_height_m: number;
+  readonly min_inner_surface_c: number;
+  readonly min_inner_surface_time: string;
+  readonly min_inner_surface_height_m: number;
+  readonly positions: readonly PositionRange[];
+  readonly layers: readonly LayerSummary[];
+  readonly through_wall_max_delta_t_k: number;
+  readonly through_wall_max_delta_t_time: string;
+  readonly through_wall_max_delta_t_height_m: number;
+  readonly water_dew_point_c: number;
+  readonly acid_dew_point_c: number | null;
+  readonly lowest_water_dew_margin_k: number;
+  readonly lowest_water_dew_margin_time: string;
+  readonly lowest_water_dew_margin_height_m: number;
+  readonly lowest_acid_dew_margin_k: number | null;
+  readonly lowest_acid_dew_margin_time: string | null;
+  readonly lowest_acid_dew_margin_height_m: number | null;
+  readonly hours_below_water_dew: readonly HeightHours[];
+  readonly hours_below_acid_dew: readonly HeightHours[];
+  readonly gas_exit_min_c: number;
+  readonly gas_exit_max_c: number;
+  readonly draft_min_pa: number;
+  readonly draft_max_pa: number;
+  readonly heat_loss_kwh_per_day: number;
+  readonly gas_to_wall_kwh_per_day: number;
+  readonly sun_absorbed_kwh_per_day: number;
+  readonly convection_kwh_per_day: number;
+  readonly radiation_kwh_per_day: number;
+  readonly energy_residual_percent: number;
+  readonly warmup: {
+    readonly firing_start_local: string;
+    readonly top: WarmupAtHeight;
+    readonly by_height: readonly WarmupAtHeight[];
+  } | null;
+  readonly warnings: readonly string[];
+  readonly cautions: readonly string[];
+}
+
+/** The cautions every report carries (design.md section 7). */
+export const CAUTIONS: readonly string[] = [
+  'These results inform engineering judgement; they do not certify a design or an installation.',
+  'Hot surfaces burn: touch limits such as those in ISO 13732-1 and ASTM C1055 are guidance; guard or insulate surfaces people can reach.',
+  'Flue gas below its acid or water dew point condenses and corrodes linings and shells; verify with measurements where margins are small.',
+  'Structural adequacy (wind, seismic, thermal stress, foundations) is not checked; the stress figure is an indicator only.',
+  'Follow local codes and standards, and have a licensed engineer review any design or operating decision based on these figures.',
+];

@@ -1,0 +1,419 @@
+/**
+ * TR-BDF2: an L-stable, stiffly accurate, second-order one-step method with a third-order embedded
+ * error estimate, for the stiff wall-conduction system.
+ *
+ * Written as a three-stage ESDIRK (M. E. Hosea & L. F. Shampine 1996, "Analysis and implementation
+ * of TR-BDF2", Appl. Numer. Math. 20:21–37; method of R. E. Bank et al. 1985, "Transient
+ * simulation of silicon devices and circuits", IEEE Trans. Electron Devices 32:1992–2007; journal
+ * details from memory), with γ = 2 − √2, d = γ/2, w = √2/4:
+ *
+ *   stage 1 (explicit):   f1 = f(t_n, y_n)                       (first same as last)
+ *   stage 2 (trapezoid):  z2 = y_n + h (d f1 + d f2),  f2 = f(t_n + γh, z2)
+ *   stage 3 (BDF2):       y_{n+1} = y_n + h (w f1 + w f2 + d f3),  f3 = f(t_n + h, y_{n+1})
+ *
+ *   b = [w, w, d]   b̂ = [(1 − w)/3, (3w + 1)/3, d/3]   (b̂ is third order)
+ *
+ * Error estimate: e = h Σ (b̂_i − b_i) f_i, filtered as (I − h d J)⁻¹ e so that stiff components,
+ * which the L-stable method damps correctly, do not inflate it (Shampine's device; Hosea &
+ * Shampine 1996, Sect. 3). Step control h_new = h · min(4, max(0.2, 0.9 · err^(−1/3))).
+ *
+ * Newton: each implicit stage solves z − h d f(t, z) = ψ with the simplified Newton matrix
+ * M = I − h d J, J the tridiagonal Jacobian from `system.jacobian`. Policy: J is kept from step to
+ * step while Newton converges quickly (at most two corrections per stage); it is re-evaluated at
+ * the current state when a stage needed more, or when Newton fails with an old J (the step is then
+ * retried with the same h). Newton failing with a fresh J cuts the step by 4. M is rebuilt for
+ * every attempt (O(N)). Convergence: the correction δ computed from a fresh rhs evaluation has
+ * ‖δ‖ · max(1, θ/(1 − θ)) ≤ 0.05 in the weighted RMS norm, θ the measured contraction rate (from
+ * the previous stage for the first correction); θ > 0.9 or six evaluations without convergence
+ * is a failure. The quadrature rates of that last evaluation are used for the stage, so the aux
+ * channels agree with the solution to within the Newton tolerance.
+ *
+ * Stops: the step is shortened (or the remaining distance split in two equal steps) to land on
+ * each stop exactly; f(t, y) is evaluated afresh after each stop, so the caller may change the
+ * system's forcing in `onStop`. `lastStep` in the result is the last accepted step, or the step
+ * the controller wanted when that one was shortened to land on the stop.
+ *
+ * No allocation per step: all work arrays are allocated once per call.
+ */
+import { IntegrationError } from './types.ts';
+import type { Integrator, IntegratorOptions, IntegratorStats, OdeSystem } from './types.ts';
+import { solveTridiagonal } from './tridiagonal.ts';
+
+/** γ = 2 − √2: the fraction of the step covered by the trapezoidal stage. */
+const GAMMA = 2 - Math.SQRT2;
+/** d = γ/2: the diagonal coefficient of both implicit stages. */
+const D = GAMMA / 2;
+/** w = √2/4: weight of f1 and f2 in the BDF2 stage. */
+const W = Math.SQRT2 / 4;
+/** b̂ − b, the error-estimate weights (they sum to zero). */
+const E1 = (1 - 4 * W) / 3;
+const E2 = 1 / 3;
+const E3 = (-2 * D) / 3;
+/**
+ * Predictor for stage 3: y_n + h (P1 f1 + P2 f2), the integral over [0, 1] of the straight line
+ * through f1 (at 0) and f2 (at γ).
+ */
+const P2 = 1 / (2 * GAMMA);
+const P1 = 1 - P2;
+
+/** A Newton correction at or below this weighted RMS norm ends the iteration. */
+const NEWTON_TOLERANCE = 0.05;
+/** Rhs evaluations allowed per implicit stage before Newton is declared failed. */
+const NEWTON_MAX_EVALUATIONS = 6;
+/** Contraction rate above which Newton is declared divergent. */
+const NEWTON_MAX_RATE = 0.9;
+/** More rhs evaluations than this in a stage → refresh J before the next step. */
+const NEWTON_SLOW_EVALUATIONS = 2;
+
+const SAFETY = 0.9;
+const MIN_FACTOR = 0.2;
+const MAX_FACTOR = 4;
+/** Step-size factor after a Newton failure with a fresh Jacobian. */
+const NEWTON_FAILURE_FACTOR = 0.25;
+const DEFAULT_MAX_STEPS = 1e6;
+
+/** Outcome of one implicit stage. */
+const Newton = { Converged: 0, Failed: 1, NonFinite: 2 } as const;
+type NewtonOutcome = (typeof Newton)[keyof typeof Newton];
+
+export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onStop) => {
+  validateProblem('TR-BDF2', system, y0, t0, stops, options);
+  const jacobian = system.jacobian;
+  if (!jacobian) {
+    throw new IntegrationError(
+      'TR-BDF2 needs the system\'s tridiagonal Jacobian (OdeSystem.jacobian); use the explicit integrator for systems without one',
+      t0,
+    );
+  }
+  const n = system.size;
+  const nAux = system.auxSize;
+  const { rtol, atol } = options;
+  const hMax = options.maxStep ?? Infinity;
+  const maxSteps = options.maxSteps ?? DEFAULT_MAX_STEPS;
+  const stats = emptyStats();
+
+  // Work arrays, allocated once per call.
+  const y = Float64Array.from(y0);
+  const f1 = new Float64Array(n);
+  const f2 = new Float64Array(n);
+  const f3 = new Float64Array(n);
+  const z = new Float64Array(n);
+  const psi = new Float64Array(n);
+  const fz = new Float64Array(n);
+  const delta = new Float64Array(n);
+  const jLower = new Float64Array(n);
+  const jDiag = new Float64Array(n);
+  const jUpper = new Float64Array(n);
+  const mLower = new Float64Array(n);
+  const mDiag = new Float64Array(n);
+  const mUpper = new Float64Array(n);
+  const scratch = new Float64Array(n);
+  const a1 = new Float64Array(nAux);
+  const a2 = new Float64Array(nAux);
+  const a3 = new Float64Array(nAux);
+  const az = new Float64Array(nAux);
+  const auxIntegral = new Float64Array(nAux);
+
+  let nonFinite = ''; // description of the last non-finite rhs value met in a trial stage
+  let stageEvaluations = 0; // rhs evaluations used by the last stage
+  let newtonRate = 0; // last measured contraction rate of Newton (carried into the next stage)
+
+  const rhs = (t: number, state: Float64Array, dydt: Float64Array, aux: Float64Array): boolean => {
+    system.rhs(t, state, dydt, aux);
+    stats.rhsEvaluations++;
+    const bad = describeNonFinite(t, dydt, aux);
+    if (bad !== '') nonFinite = bad;
+    return bad === '';
+  };
+
+  /**
+   * Solve z − hd·f(tStage, z) = psi by simplified Newton from the predictor already in `z`.
+   * On convergence `z` holds the stage value, `fStage` the consistent stage derivative
+   * (z − psi)/hd and `aStage` the quadrature rates.
+   */
+  const solveStage = (tStage: number, hd: number, fStage: Float64Array, aStage: Float64Array): NewtonOutcome => {
+    let previousNorm = 0;
+    for (let k = 0; k < NEWTON_MAX_EVALUATIONS; k++) {
+      stageEvaluations = k + 1;
+      if (!rhs(tStage, z, fz, az)) return Newton.NonFinite;
+      for (let i = 0; i < n; i++) delta[i] = psi[i] + hd * fz[i] - z[i];
+      solveTridiagonal(mLower, mDiag, mUpper, delta, delta, scratch);
+      stats.newtonIterations++;
+      const norm = weightedRmsNorm(delta, y, y, atol, rtol);
+      if (!Number.isFinite(norm)) {
+        nonFinite = `the Newton correction became non-finite at t = ${tStage} s`;
+        return Newton.NonFinite;
+      }
+      if (k > 0) {
+        newtonRate = norm / previousNorm;
+        if (newtonRate > NEWTON_MAX_RATE) return Newton.Failed;
+      }
+      for (let i = 0; i < n; i++) z[i] += delta[i];
+      // Error left after this correction ≈ rate/(1 − rate) · norm for a linearly converging
+      // iteration; never credited below the correction itself (the aux rates lag by one).
+      if (norm * Math.max(1, newtonRate / (1 - newtonRate)) <= NEWTON_TOLERANCE) {
+        const inverseHd = 1 / hd;
+        for (let i = 0; i < n; i++) fStage[i] = (z[i] - psi[i]) * inverseHd;
+        aStage.set(az);
+        return Newton.Converged;
+      }
+      previousNorm = norm;
+    }
+    return Newton.Failed;
+  };
+
+  let t = t0;
+  if (!rhs(t, y, f1, a1)) throw new IntegrationError(`TR-BDF2: ${nonFinite} (initial state)`, t);
+  let h = Math.max(
+    options.initialStep ?? guessInitialStep(system, t, y, f1, stops[0] - t, 2, atol, rtol, z, fz, az, stats),
+    minimumStep(t),
+  );
+  let jacobianAtCurrentState = false;
+  let refreshJacobian = true;
+  let lastAccepted = h;
+
+  for (let s = 0; s < stops.length; s++) {
+    const stop = stops[s];
+    if (s > 0 && !rhs(t, y, f1, a1)) throw new IntegrationError(`TR-BDF2: ${nonFinite}`, t);
+    let previousRejected = false;
+    while (t < stop) {
+      if (stats.steps + stats.rejected + stats.newtonFailures >= maxSteps) {
+        throw tooManySteps('TR-BDF2', maxSteps, t, stop);
+      }
+      const hWanted = Math.min(h, hMax);
+      const hStep = stepTowardStop(t, stop, hWanted, hMax);
+      const lands = hStep === stop - t;
+      const tNew = lands ? stop : t + hStep;
+
+      if (refreshJacobian && !jacobianAtCurrentState) {
+        jacobian.call(system, t, y, jLower, jDiag, jUpper);
+        stats.jacobianEvaluations++;
+        jacobianAtCurrentState = true;
+      }
+      refreshJacobian = false;
+      const hd = hStep * D;
+      for (let i = 0; i < n; i++) {
+        mLower[i] = -hd * jLower[i];
+        mDiag[i] = 1 - hd * jDiag[i];
+        mUpper[i] = -hd * jUpper[i];
+      }
+
+      // Stage 2: trapezoid to t + γh; predictor: explicit Euler.
+      for (let i = 0; i < n; i++) {
+        psi[i] = y[i] + hd * f1[i];
+        z[i] = y[i] + GAMMA * hStep * f1[i];
+      }
+      let outcome: NewtonOutcome = solveStage(t + GAMMA * hStep, hd, f2, a2);
+      let slow = stageEvaluations > NEWTON_SLOW_EVALUATIONS;
+      if (outcome === Newton.Converged) {
+        // Stage 3: BDF2 to t + h; predictor: integral of the line through f1, f2.
+        const hw = hStep * W;
+        for (let i = 0; i < n; i++) {
+          psi[i] = y[i] + hw * (f1[i] + f2[i]);
+          z[i] = y[i] + hStep * (P1 * f1[i] + P2 * f2[i]);
+        }
+        outcome = solveStage(tNew, hd, f3, a3);
+        slow ||= stageEvaluations > NEWTON_SLOW_EVALUATIONS;
+      }
+      if (slow) refreshJacobian = true;
+
+      if (outcome !== Newton.Converged) {
+        stats.newtonFailures++;
+        if (!jacobianAtCurrentState) {
+          refreshJacobian = true; // retry the same h with a fresh J
+          continue;
+        }
+        h = hStep * NEWTON_FAILURE_FACTOR;
+        checkStepSize('TR-BDF2', h, t, outcome === Newton.NonFinite ? nonFinite : 'Newton iteration does not converge');
+        previousRejected = true;
+        continue;
+      }
+
+      // Error estimate, filtered through M⁻¹ = (I − h d J)⁻¹. `delta` is free here.
+      for (let i = 0; i < n; i++) delta[i] = hStep * (E1 * f1[i] + E2 * f2[i] + E3 * f3[i]);
+      solveTridiagonal(mLower, mDiag, mUpper, delta, delta, scratch);
+      const err = weightedRmsNorm(delta, y, z, atol, rtol);
+
+      if (err <= 1) {
+        for (let j = 0; j < nAux; j++) {
+          auxIntegral[j] += hStep * (W * (a1[j] + a2[j]) + D * a3[j]);
+        }
+        t = tNew;
+        y.set(z);
+        f1.set(f3);
+        a1.set(a3);
+        stats.steps++;
+        jacobianAtCurrentState = false;
+        const factor = Math.min(previousRejected ? 1 : MAX_FACTOR, controllerFactor(err, 3));
+        lastAccepted = hStep < hWanted && factor >= 1 ? hWanted : hStep;
+        h = hStep < hWanted && factor >= 1 ? Math.max(hWanted, hStep * factor) : hStep * factor;
+        previousRejected = false;
+      } else {
+        stats.rejected++;
+        h = hStep * Math.min(1, controllerFactor(err, 3));
+        checkStepSize('TR-BDF2', h, t, `the error estimate stays above the tolerance (weighted error ${err.toPrecision(3)})`);
+        previousRejected = true;
+      }
+    }
+    onStop?.(t, y, auxIntegral);
+  }
+
+  return { y: Float64Array.from(y), auxIntegral: Float64Array.from(auxIntegral), lastStep: lastAccepted, stats };
+};
+
+// ---------------------------------------------------------------------------------------------
+// Step-control helpers shared with the explicit integrator (dormandPrince.ts).
+// ---------------------------------------------------------------------------------------------
+
+/** Fresh statistics record. */
+export function emptyStats(): IntegratorStats {
+  return { steps: 0, rejected: 0, rhsEvaluations: 0, jacobianEvaluations: 0, newtonIterations: 0, newtonFailures: 0 };
+}
+
+/**
+ * Weighted RMS norm sqrt(mean_i (v_i / (atol + rtol · max(|a_i|, |b_i|)))²), the usual error
+ * norm of adaptive ODE codes (Hairer, Nørsett & Wanner, Solving ODEs I, 2nd ed. 1993, Sect. II.4,
+ * eq. 4.11). Returns 0 for an empty vector and NaN if any v_i is NaN.
+ */
+export function weightedRmsNorm(v: Float64Array, a: Float64Array, b: Float64Array, atol: number, rtol: number): number {
+  const n = v.length;
+  if (n === 0) return 0;
+  let sum = 0;
+  for (let i = 0; i < n; i++) {
+    const scale = atol + rtol * Math.max(Math.abs(a[i]), Math.abs(b[i]));
+    const r = v[i] / scale;
+    sum += r * r;
+  }
+  return Math.sqrt(sum / n);
+}
+
+/**
+ * Step-size factor 0.9 · err^(−1/q), clipped to [0.2, ∞) (the caller clips the top); q is the
+ * order of the error estimate plus one. A non-finite error gives the smallest factor.
+ */
+export function controllerFactor(err: number, q: number): number {
+  if (!(err >= 0) || !Number.isFinite(err)) return MIN_FACTOR;
+  if (err === 0) return Infinity;
+  return Math.max(MIN_FACTOR, SAFETY * Math.pow(err, -1 / q));
+}
+
+/**
+ * The step to take from t toward `stop` when the controller wants `h` (already ≤ hMax):
+ * the whole remaining distance when it is within 5 % of h (and ≤ hMax, give or take rounding),
+ * half of it when it is below 2h (no sliver step before the stop), h otherwise. The caller detects landing by
+ * `result === stop − t` and then sets t = stop exactly.
+ */
+export function stepTowardStop(t: number, stop: number, h: number, hMax: number): number {
+  const remaining = stop - t;
+  if (remaining <= Math.min(1.05 * h, hMax * (1 + 1e-9))) return remaining;
+  if (remaining < 2 * h) return remaining / 2;
+  return h;
+}
+
+/**
+ * Smallest step allowed at time t: max(1e-9 s, 1e-10 · |t|) (below it the step is lost in the
+ * rounding of t, or the problem is not solvable at this tolerance).
+ */
+export function minimumStep(t: number): number {
+  return Math.max(1e-9, 1e-10 * Math.abs(t));
+}
+
+/** Throw an IntegrationError when a cut step has fallen below `minimumStep(t)`. */
+export function checkStepSize(method: string, h: number, t: number, reason: string): void {
+  if (h < minimumStep(t)) {
+    throw new IntegrationError(
+      `${method}: step size underflow (h = ${h.toExponential(2)} s) at t = ${t} s because ${reason}; ` +
+        'check the model for a discontinuity or non-physical state near this time, or loosen rtol/atol',
+      t,
+    );
+  }
+}
+
+/** The error thrown when the attempted-step budget is spent. */
+export function tooManySteps(method: string, maxSteps: number, t: number, stop: number): IntegrationError {
+  return new IntegrationError(
+    `${method}: more than maxSteps = ${maxSteps} step attempts, stuck at t = ${t} s on the way to ${stop} s; ` +
+      'the problem may be too stiff for this integrator or the tolerances too tight; raise maxSteps or loosen rtol/atol',
+    t,
+  );
+}
+
+/**
+ * '' if every value is finite, else a sentence naming the first non-finite value, for an error
+ * message.
+ */
+export function describeNonFinite(t: number, dydt: Float64Array, aux: Float64Array): string {
+  for (let i = 0; i < dydt.length; i++) {
+    if (!Number.isFinite(dydt[i])) return `rhs returned a non-finite value (${dydt[i]}) for unknown ${i} at t = ${t} s`;
+  }
+  for (let j = 0; j < aux.length; j++) {
+    if (!Number.isFinite(aux[j])) return `rhs returned a non-finite value (${aux[j]}) for quadrature channel ${j} at t = ${t} s`;
+  }
+  return '';
+}
+
+/** Check the arguments of an integrator call; throws IntegrationError with what is wrong. */
+export function validateProblem(
+  method: string,
+  system: OdeSystem,
+  y0: Float64Array,
+  t0: number,
+  stops: readonly number[],
+  options: IntegratorOptions,
+): void {
+  const fail = (what: string): never => {
+    throw new IntegrationError(`${method}: ${what}`, t0);
+  };
+  if (y0.length !== system.size) fail(`y0 has ${y0.length} values but the system has ${system.size} unknowns`);
+  for (let i = 0; i < y0.length; i++) if (!Number.isFinite(y0[i])) fail(`initial value ${i} is ${y0[i]}`);
+  if (!Number.isFinite(t0)) fail(`t0 is ${t0}`);
+  if (stops.length === 0) fail('no stops given');
+  for (let s = 0; s < stops.length; s++) {
+    const previous = s === 0 ? t0 : stops[s - 1];
+    if (!(stops[s] > previous) || !Number.isFinite(stops[s])) {
+      fail(`stops must be finite, strictly increasing and after t0 = ${t0} s (stop ${s} is ${stops[s]} s)`);
+    }
+  }
+  if (!(options.rtol >= 0) || !(options.atol >= 0) || options.rtol + options.atol <= 0) {
+    fail(`tolerances must be ≥ 0 and not both 0 (rtol = ${options.rtol}, atol = ${options.atol})`);
+  }
+  if (options.initialStep !== undefined && !(options.initialStep > 0)) fail(`initialStep must be > 0 (got ${options.initialStep})`);
+  if (options.maxStep !== undefined && !(options.maxStep > 0)) fail(`maxStep must be > 0 (got ${options.maxStep})`);
+}
+
+/**
+ * Starting step size after Hairer, Nørsett & Wanner (Solving ODEs I, 2nd ed. 1993, Sect. II.4,
+ * "Starting step size"): h0 = 0.01 ‖y0‖/‖f0‖, one explicit Euler step to estimate ‖y''‖, then
+ * h1 = (0.01 / max(‖f0‖, ‖y''‖))^(1/(p+1)) and h = min(100 h0, h1), further limited to `span`.
+ * `p` is the order of the method's error estimate. Uses one rhs evaluation (counted in stats)
+ * and the scratch arrays yTry, fTry, auxTry (length size, size, auxSize).
+ */
+export function guessInitialStep(
+  system: OdeSystem,
+  t0: number,
+  y0: Float64Array,
+  f0: Float64Array,
+  span: number,
+  p: number,
+  atol: number,
+  rtol: number,
+  yTry: Float64Array,
+  fTry: Float64Array,
+  auxTry: Float64Array,
+  stats: IntegratorStats,
+): number {
+  const n = y0.length;
+  const fallback = 1e-6 * Math.max(1, span);
+  const d0 = weightedRmsNorm(y0, y0, y0, atol, rtol);
+  const d1 = weightedRmsNorm(f0, y0, y0, atol, rtol);
+  let h0 = d0 < 1e-5 || d1 < 1e-5 ? fallback : 0.01 * (d0 / d1);
+  h0 = Math.min(h0, span);
+  for (let i = 0; i < n; i++) yTry[i] = y0[i] + h0 * f0[i];
+  system.rhs(t0 + h0, yTry, fTry, auxTry);
+  stats.rhsEvaluations++;
+  for (let i = 0; i < n; i++) fTry[i] -= f0[i];
+  const d2 = weightedRmsNorm(fTry, y0, y0, atol, rtol) / h0;
+  const dMax = Math.max(d1, d2);
+  const h1 = !Number.isFinite(dMax) ? h0 * 1e-3 : dMax <= 1e-15 ? Math.max(fallback, h0 * 1e-3) : Math.pow(0.01 / dMax, 1 / (p + 1));
+  return Math.max(Math.min(100 * h0, h1, span), minimumStep(t0));
+}

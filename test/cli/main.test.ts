@@ -1,0 +1,156 @@
+/**
+ * The command line: bad input of every kind gets exit code 2, one clear line per problem (path,
+ * value found, what was expected with units) and leaves nothing written; a good run writes its files.
+ */
+import { describe, it, expect, beforeAll } from 'vitest';
+import { mkdtempSync, readFileSync, writeFileSync, existsSync, mkdirSync, readdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { parse, stringify } from 'yaml';
+import { runCli } from './helpers.ts';
+
+const demo = parse(readFileSync('scenarios/demo.yaml', 'utf8'));
+let dir: string;
+
+/** A copy of the demo, changed by `edit`, with a short run so the tests stay fast. */
+function scenarioFile(name: string, edit: (s: any) => void = () => {}): string {
+  const s = structuredClone(demo);
+  s.run.days = 1;
+  s.run.output_interval = 30;
+  s.stack.segments = 4;
+  edit(s);
+  const file = join(dir, `${name}.yaml`);
+  writeFileSync(file, stringify(s));
+  return file;
+}
+
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'stackday-cli-'));
+});
+
+async function expectBadInput(args: string[], ...messages: (string | RegExp)[]) {
+  const out = join(dir, `out-${Math.random().toString(36).slice(2)}`);
+  const r = await runCli([...args, '--out', out]);
+  expect(r.code).toBe(2);
+  for (const m of messages) expect(r.stderr).toMatch(m);
+  expect(r.stderr).not.toMatch(/\n\s+at .*\(.*:\d+:\d+\)/); // no stack trace
+  expect(r.stderr).not.toMatch(/NaN/);
+  expect(existsSync(out)).toBe(false); // nothing written
+  return r;
+}
+
+describe('bad input', () => {
+  it('a missing file', async () => {
+    await expectBadInput(['run', join(dir, 'nope.yaml')], /cannot be read: no such file/);
+  });
+
+  it('an unreadable file (a folder)', async () => {
+    const folder = join(dir, 'a-folder.yaml');
+    mkdirSync(folder, { recursive: true });
+    await expectBadInput(['run', folder], /cannot be read/);
+  });
+
+  it('a file that is not YAML', async () => {
+    const file = join(dir, 'broken.yaml');
+    writeFileSync(file, 'name: [unclosed\nsite: {');
+    await expectBadInput(['run', file], /not valid YAML/);
+  });
+
+  it('a negative thickness names the path, the value and the unit expected', async () => {
+    const file = scenarioFile('neg', (s) => (s.stack.layers[1].thickness = '-5 mm'));
+    await expectBadInput(['run', file], /stack\.layers\[1\]\.thickness: found "-5 mm"; expected a positive length.*plain number in m/);
+  });
+
+  it('an emissivity above 1', async () => {
+    const file = scenarioFile('eps', (s) => (s.surface.emissivity = 1.3));
+    await expectBadInput(['run', file], /surface\.emissivity: found 1\.3; expected a fraction between 0 and 1/);
+  });
+
+  it('a latitude outside ±90', async () => {
+    const file = scenarioFile('lat', (s) => (s.site.latitude = 123));
+    await expectBadInput(['run', file], /site\.latitude: found 123; expected degrees north between -90 and 90/);
+  });
+
+  it('a wrong unit', async () => {
+    const file = scenarioFile('unit', (s) => (s.stack.height = '45 kg'));
+    await expectBadInput(['run', file], /stack\.height: found "45 kg"; expected .*length/);
+  });
+
+  it('a typo in a key is an error, not ignored', async () => {
+    const file = scenarioFile('typo', (s) => {
+      s.surface.emisivity = 0.9;
+    });
+    await expectBadInput(['run', file], /surface\.emisivity: unknown key/);
+  });
+
+  it('an unknown material gets a suggestion', async () => {
+    const file = scenarioFile('mat', (s) => (s.stack.layers[2].material = 'carbon-steal'));
+    await expectBadInput(['run', file], /stack\.layers\[2\]\.material: found "carbon-steal".*did you mean "carbon-steel"/);
+  });
+
+  it('several problems are all reported, one line each', async () => {
+    const file = scenarioFile('many', (s) => {
+      s.surface.emissivity = -1;
+      s.site.latitude = 91;
+      s.stack.layers[0].thickness = 0;
+    });
+    const r = await expectBadInput(['run', file], /surface\.emissivity/, /site\.latitude/, /stack\.layers\[0\]\.thickness/);
+    expect(r.stderr).toMatch(/3 problems/);
+  });
+
+  it('a schedule whose times go backwards', async () => {
+    const file = scenarioFile('sched', (s) => (s.flue.schedule.daily[3].time = '04:00'));
+    await expectBadInput(['run', file], /flue\.schedule\.daily\[3\]\.time: found "04:00"; expected a time not before/);
+  });
+
+  it('a bad time zone', async () => {
+    const file = scenarioFile('tz', (s) => (s.site.time_zone = 'Mars/Olympus'));
+    await expectBadInput(['run', file], /site\.time_zone: found "Mars\/Olympus"/);
+  });
+
+  it('a bad command-line option', async () => {
+    const file = scenarioFile('opt');
+    await expectBadInput(['run', file, '--chart-size', 'huge'], /--chart-size: found "huge"/);
+  });
+});
+
+describe('a good run', () => {
+  it('writes summary.json, timeseries.csv and segments.csv and exits 0', async () => {
+    const file = scenarioFile('good');
+    const out = join(dir, 'good-out');
+    const r = await runCli(['run', file, '--out', out, '--no-charts', '--quiet']);
+    expect(r.code).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['segments.csv', 'summary.json', 'timeseries.csv']);
+    const summary = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+    expect(summary.peak_shell_c).toBeTypeOf('number');
+    expect(JSON.stringify(summary)).not.toMatch(/NaN/);
+    const csv = readFileSync(join(out, 'timeseries.csv'), 'utf8').split('\n');
+    expect(csv[0]).toBe('time,hours,height_m,position,radius_m,temperature_c');
+    // tidy form: instants × segments × nodes rows (+ header, + final newline)
+    expect(csv.length - 2).toBe(summary.run.segments * summary.run.nodes_per_segment * (24 * 2 + 1));
+  });
+
+  it('--strict exits 3 when a limit fails, 0 without it', async () => {
+    const file = scenarioFile('strict', (s) => (s.limits.shell_touch = 25));
+    const out = join(dir, 'strict-out');
+    expect((await runCli(['run', file, '--out', out, '--no-charts', '--quiet'])).code).toBe(0);
+    const r = await runCli(['run', file, '--out', out, '--no-charts', '--quiet', '--strict']);
+    expect(r.code).toBe(3);
+    expect(r.stderr).toMatch(/shell_touch/);
+  });
+
+  it('prints the JSON Schema and the material list', async () => {
+    const schema = await runCli(['schema']);
+    expect(schema.code).toBe(0);
+    const parsed = JSON.parse(schema.stdout);
+    expect(parsed.properties.stack.properties.layers.type).toBe('array');
+    const mats = await runCli(['materials']);
+    expect(mats.code).toBe(0);
+    for (const name of ['carbon-steel', 'fireclay-brick', 'mineral-wool', 'air-gap']) expect(mats.stdout).toContain(name);
+  });
+
+  it('--version and --help exit 0', async () => {
+    expect((await runCli(['--version'])).code).toBe(0);
+    expect((await runCli(['run', '--help'])).code).toBe(0);
+  });
+});
