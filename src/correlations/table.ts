@@ -195,7 +195,7 @@ export function checkValidity<N extends CorrelationName>(
     }
     const range = e.ranges[key];
     if (range && (v < range[0] || v > range[1])) {
-      problems.push(`${key} = ${v} outside [${range[0]}, ${range[1]}]`);
+      problems.push(`${key} = ${formatNumber(v)} outside [${formatNumber(range[0])}, ${formatNumber(range[1])}]`);
     }
   }
   if (problems.length === 0) {
@@ -214,4 +214,10 @@ export function callCorrelation<N extends CorrelationName>(
   inputs: CorrelationInputs<N>,
 ): number {
   return looseEntry(name).fn(inputs as Readonly<Record<string, number>>);
+}
+
+/** A number for messages: 3 significant figures, exponent form for very large or small values. */
+function formatNumber(v: number): string {
+  if (!Number.isFinite(v)) return String(v);
+  return Math.abs(v) >= 1e5 || (v !== 0 && Math.abs(v) < 1e-3) ? v.toExponential(2) : String(Number(v.toPrecision(4)));
 }

@@ -33,7 +33,7 @@ const carbonSteel: Material = {
   // 1000 K is the magnetic transition near the Curie point, ~1043 K).
   specificHeat: table([[300, 434], [400, 487], [600, 559], [800, 685], [1000, 1169]]),
   emissivity: 0.8, // oxidised steel, Incropera Table A.12 range 0.79–0.8 (from memory)
-  maxServiceTemperatureK: 723, // 450 °C: creep / scaling limit of plain carbon steel, common practice
+  maxServiceTemperatureK: 723.15, // 450 °C: creep / scaling limit of plain carbon steel, common practice
   youngsModulus: 200e9,
   thermalExpansion: 12e-6,
   poissonRatio: 0.29,
@@ -51,7 +51,7 @@ const stainlessSteel: Material = {
   conductivity: table([[100, 9.2], [200, 12.6], [300, 14.9], [400, 16.6], [600, 19.8], [800, 22.6], [1000, 25.4], [1200, 28.0], [1500, 31.7]]),
   specificHeat: table([[100, 272], [200, 402], [300, 477], [400, 515], [600, 557], [800, 582], [1000, 611], [1200, 640], [1500, 682]]),
   emissivity: 0.6, // lightly oxidised 304; polished ≈ 0.17, heavily oxidised ≈ 0.85 (Incropera Table A.12, from memory)
-  maxServiceTemperatureK: 1173, // 900 °C continuous oxidation limit of 304 in air, common practice (data sheets give ~870–925 °C)
+  maxServiceTemperatureK: 1173.15, // 900 °C continuous oxidation limit of 304 in air, common practice (data sheets give ~870–925 °C)
   youngsModulus: 193e9,
   thermalExpansion: 17.3e-6,
   poissonRatio: 0.29,
@@ -71,7 +71,7 @@ const fireclayBrick: Material = {
   // Incropera Table A.3 gives cp = 960 J/(kg K) at 300 K; rise with T common practice for aluminosilicates.
   specificHeat: table([[300, 960], [600, 1060], [900, 1130], [1200, 1180], [1500, 1220]]),
   emissivity: 0.75, // fireclay at high temperature, Incropera Table A.12 (from memory)
-  maxServiceTemperatureK: 1573, // 1300 °C, medium-duty fireclay, common practice
+  maxServiceTemperatureK: 1573.15, // 1300 °C, medium-duty fireclay, common practice
   youngsModulus: 20e9,
   thermalExpansion: 5.5e-6,
   poissonRatio: 0.2,
@@ -89,7 +89,7 @@ const insulatingFirebrick: Material = {
   conductivity: table([[300, 0.12], [533, 0.14], [811, 0.16], [1089, 0.19], [1366, 0.23]]),
   specificHeat: table([[300, 880], [600, 1000], [900, 1080], [1200, 1130]]),
   emissivity: 0.8,
-  maxServiceTemperatureK: 1533, // group 23: 1260 °C (2300 °F) classification
+  maxServiceTemperatureK: 1533.15, // group 23: 1260 °C (2300 °F) classification
   youngsModulus: 1.5e9,
   thermalExpansion: 5e-6,
   poissonRatio: 0.2,
@@ -106,7 +106,7 @@ const denseCastable: Material = {
   conductivity: table([[300, 1.2], [673, 1.2], [1073, 1.3], [1473, 1.45]]),
   specificHeat: table([[300, 880], [673, 1000], [1073, 1100], [1473, 1150]]),
   emissivity: 0.8,
-  maxServiceTemperatureK: 1673, // 1400 °C, common practice for conventional dense castables
+  maxServiceTemperatureK: 1673.15, // 1400 °C, common practice for conventional dense castables
   youngsModulus: 30e9,
   thermalExpansion: 6e-6,
   poissonRatio: 0.2,
@@ -122,7 +122,7 @@ const clayFlueLiner: Material = {
   // 840 J/(kg K) at 300 K as for clay tile/brick (ASHRAE Handbook Fundamentals ch. 26), rising per common practice.
   specificHeat: table([[300, 840], [600, 1000], [900, 1080], [1200, 1120]]),
   emissivity: 0.85,
-  maxServiceTemperatureK: 1255, // ~1800 °F, common practice for clay flue liners in service
+  maxServiceTemperatureK: 1255.15, // ~1800 °F, common practice for clay flue liners in service
   youngsModulus: 20e9,
   thermalExpansion: 5.5e-6,
   poissonRatio: 0.2,
@@ -140,7 +140,7 @@ const commonBrick: Material = {
   conductivity: table([[300, 0.72], [500, 0.8], [800, 0.9]]),
   specificHeat: table([[300, 835], [500, 950], [800, 1050]]),
   emissivity: 0.93, // red brick, Incropera Table A.11 (0.93–0.96), from memory
-  maxServiceTemperatureK: 973, // 700 °C, common practice for ordinary building brick
+  maxServiceTemperatureK: 973.15, // 700 °C, common practice for ordinary building brick
   youngsModulus: 14e9,
   thermalExpansion: 6e-6,
   poissonRatio: 0.2,
@@ -160,7 +160,7 @@ const concrete: Material = {
   // 880 at 300 K (Incropera Table A.3); dry-concrete cp rise per EN 1992-1-2 (1000, 1050, 1100), from memory.
   specificHeat: table([[300, 880], [473, 1000], [673, 1050], [873, 1100]]),
   emissivity: 0.9, // concrete, Incropera Table A.11 (0.88–0.93), from memory
-  maxServiceTemperatureK: 573, // 300 °C: strength loss of structural concrete, common practice
+  maxServiceTemperatureK: 573.15, // 300 °C: strength loss of structural concrete, common practice
   youngsModulus: 30e9,
   thermalExpansion: 10e-6,
   poissonRatio: 0.2,
@@ -178,7 +178,7 @@ const mineralWool: Material = {
   conductivity: table([[297, 0.036], [366, 0.044], [477, 0.058], [589, 0.077], [700, 0.1], [811, 0.128]]),
   specificHeat: table([[300, 840], [500, 920], [800, 1000]]),
   emissivity: 0.9, // outer face is normally cladded; value for the fibre surface, common practice
-  maxServiceTemperatureK: 922, // 650 °C (1200 °F), common practice for rock wool pipe and block insulation
+  maxServiceTemperatureK: 922.15, // 650 °C (1200 °F), common practice for rock wool pipe and block insulation
   youngsModulus: 1e6, // nominal: carries no load
   thermalExpansion: 5e-6,
   poissonRatio: 0.1,
@@ -196,7 +196,7 @@ const ceramicFibreBlanket: Material = {
   conductivity: table([[300, 0.035], [473, 0.05], [673, 0.085], [873, 0.13], [1073, 0.18], [1273, 0.25]]),
   specificHeat: table([[300, 850], [600, 1000], [900, 1080], [1200, 1130]]),
   emissivity: 0.85,
-  maxServiceTemperatureK: 1373, // 1100 °C continuous use for the 1260 °C classification, common practice
+  maxServiceTemperatureK: 1373.15, // 1100 °C continuous use for the 1260 °C classification, common practice
   youngsModulus: 1e6, // nominal: carries no load
   thermalExpansion: 5e-6,
   poissonRatio: 0.1,
@@ -212,7 +212,7 @@ const calciumSilicate: Material = {
   conductivity: table([[311, 0.055], [366, 0.059], [422, 0.065], [477, 0.071], [533, 0.077], [589, 0.084], [644, 0.091], [700, 0.098]]),
   specificHeat: table([[300, 840], [500, 920], [700, 1000]]),
   emissivity: 0.9,
-  maxServiceTemperatureK: 922, // 650 °C (1200 °F), ASTM C533 Type I
+  maxServiceTemperatureK: 922.15, // 650 °C (1200 °F), ASTM C533 Type I
   youngsModulus: 3e8,
   thermalExpansion: 6.5e-6,
   poissonRatio: 0.2,

@@ -21,6 +21,7 @@ import { flueGasDewPoints } from '../flue/dewPoint.ts';
 import { stackDraftPa } from '../flue/draft.ts';
 import { airDensityIdealGas, airPressureAtElevation } from '../properties/air.ts';
 import { SECONDS_PER_DAY } from '../properties/constants.ts';
+import { checkValidity, type CorrelationName } from '../correlations/table.ts';
 
 export interface SimulateOptions {
   /** Called now and then with the fraction of the run done (0–1). */
@@ -238,7 +239,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     periodic,
     firingStartT: run.mode === 'warmup' ? t0 : null,
     integrator: { name: run.integrator, ...stats, computeMs: performance.now() - started },
-    warnings: [],
+    warnings: rec.validityWarnings(),
   };
 }
 
@@ -285,6 +286,8 @@ class Recorder {
   private inst: Record<string, number[]> = {};
   private readonly waterDew: number;
   private readonly acidDew: number | null;
+  /** Per correlation: output points checked, points outside the published range, and the first warning. */
+  private readonly validity = new Map<CorrelationName, { checked: number; outside: number; example: string }>();
 
   constructor(private readonly prep: Prepared) {
     const inputs = prep.inputs;
@@ -321,6 +324,7 @@ class Recorder {
       acid[s] = this.acidDew === null ? Number.NaN : y[s * n]! - this.acidDew;
       gasSum += 0.5 * (diag.gasInK[s]! + diag.gasOutK[s]!);
     }
+    this.checkRanges(diag, S);
     add('waterDewMarginK', water);
     add('acidDewMarginK', acid);
     const put = (name: string, v: number) => (this.inst[name] ??= []).push(v);
@@ -339,6 +343,43 @@ class Recorder {
     const gasDensity = system.gas(gasMean).density;
     const airDensity = airDensityIdealGas(d.airTemperatureK, airPressureAtElevation(inputs.site.elevationM));
     put('draftPa', stackDraftPa(inputs.stack.height, airDensity, gasDensity));
+  }
+
+  private note(name: CorrelationName, warning: string | null) {
+    const v = this.validity.get(name) ?? { checked: 0, outside: 0, example: '' };
+    v.checked++;
+    if (warning) {
+      v.outside++;
+      if (!v.example) v.example = warning;
+    }
+    this.validity.set(name, v);
+  }
+
+  /** Check the correlations' inputs at this output instant against their published ranges. */
+  private checkRanges(diag: ReturnType<typeof makeSegmentDiagnostics>, S: number) {
+    const { inputs } = this.prep;
+    for (let s = 0; s < S; s++) {
+      if (inputs.outside.filmCoefficient === undefined) {
+        const pr = diag.prandtlOutside[s]!;
+        const re = diag.reynoldsOutside[s]!;
+        const ra = diag.rayleighOutside[s]!;
+        if (re > 0) this.note('nuCylinderChurchillBernstein', checkValidity('nuCylinderChurchillBernstein', { re, pr }));
+        if (ra > 0) this.note('nuVerticalPlateChurchillChu', checkValidity('nuVerticalPlateChurchillChu', { ra, pr }));
+      }
+      if (inputs.flue.filmCoefficient === undefined)
+        this.note('nuPipeBlended', checkValidity('nuPipeBlended', { re: diag.reynoldsInside[s]!, pr: diag.prandtlInside[s]! }));
+    }
+  }
+
+  /** One warning per correlation used outside its published range, with how often. */
+  validityWarnings(): string[] {
+    const out: string[] = [];
+    for (const [, v] of this.validity) {
+      if (v.outside === 0) continue;
+      const pct = (100 * v.outside) / v.checked;
+      out.push(`correlation outside its published range at ${pct < 1 ? pct.toFixed(2) : pct.toFixed(0)} % of the output points (first: ${v.example})`);
+    }
+    return out;
   }
 
   finish(): TimeSeries {

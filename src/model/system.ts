@@ -16,7 +16,7 @@ import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from 
 import { airPropertiesAt, airPropertiesInto } from '../properties/air.ts';
 import { outsideFilmCoefficient } from '../correlations/external.ts';
 import { nuPipeBlended } from '../correlations/internal.ts';
-import { STEFAN_BOLTZMANN } from '../properties/constants.ts';
+import { radiationToSkyAndGround, radiationCoefficientToSkyAndGround } from '../correlations/radiation.ts';
 import type { GasPropertyLookup } from '../properties/flueGas.ts';
 
 export const AUX_GAS_TO_WALL = 0;
@@ -37,6 +37,11 @@ export interface SegmentDiagnostics {
   radiationPerMetre: Float64Array;
   sunPerMetre: Float64Array;
   reynoldsInside: Float64Array;
+  prandtlInside: Float64Array;
+  /** Outside Reynolds number on the outer diameter, Rayleigh number on the height, film Prandtl number (NaN with a fixed film coefficient). */
+  reynoldsOutside: Float64Array;
+  rayleighOutside: Float64Array;
+  prandtlOutside: Float64Array;
 }
 
 export function makeSegmentDiagnostics(segments: number): SegmentDiagnostics {
@@ -52,6 +57,10 @@ export function makeSegmentDiagnostics(segments: number): SegmentDiagnostics {
     radiationPerMetre: f(),
     sunPerMetre: f(),
     reynoldsInside: f(),
+    prandtlInside: f(),
+    reynoldsOutside: f(),
+    rayleighOutside: f(),
+    prandtlOutside: f(),
   };
 }
 
@@ -194,27 +203,30 @@ export class StackWallSystem implements OdeSystem {
       const ts = y[o + n - 1]!;
       const wind = d.windSpeedRef * geometry.windFactor[s]!;
       let hOut: number;
+      let reOut = Number.NaN;
+      let raOut = Number.NaN;
       if (outside.filmCoefficient !== undefined) hOut = outside.filmCoefficient;
       else {
         const air = airPropertiesInto(this.film, 0.5 * (ts + d.airTemperatureK));
-        hOut = outsideFilmCoefficient(
+        const film = outsideFilmCoefficient(
           { windSpeed: wind, outerDiameter: dOut, height: inputs.stack.height, surfaceTemperatureK: ts, airTemperatureK: d.airTemperatureK },
           air,
-        ).h;
+        );
+        hOut = film.h;
+        reOut = film.re;
+        raOut = film.ra;
       }
       const qc = hOut * Math.PI * dOut * (ts - d.airTemperatureK);
       let qr = 0;
       let hr = 0;
-      const ts3 = ts * ts * ts;
+      const perimeter = Math.PI * dOut;
       if (outside.radiation.kind === 'sky-ground') {
-        const tk = d.skyTemperatureK;
-        const tg = d.groundTemperatureK;
-        qr = eps * STEFAN_BOLTZMANN * (ts3 * ts - 0.5 * (tk * tk * tk * tk + tg * tg * tg * tg)) * Math.PI * dOut;
-        hr = 4 * eps * STEFAN_BOLTZMANN * ts3 * Math.PI * dOut;
+        qr = radiationToSkyAndGround(ts, eps, d.skyTemperatureK, d.groundTemperatureK) * perimeter;
+        hr = radiationCoefficientToSkyAndGround(ts, eps) * perimeter;
       } else if (outside.radiation.kind === 'surroundings') {
-        const tk = d.skyTemperatureK;
-        qr = eps * STEFAN_BOLTZMANN * (ts3 * ts - tk * tk * tk * tk) * Math.PI * dOut;
-        hr = 4 * eps * STEFAN_BOLTZMANN * ts3 * Math.PI * dOut;
+        // surroundings at one temperature: sky and ground both at it
+        qr = radiationToSkyAndGround(ts, eps, d.skyTemperatureK, d.skyTemperatureK) * perimeter;
+        hr = radiationCoefficientToSkyAndGround(ts, eps) * perimeter;
       }
       const qs = d.sunPerMetre;
       dydt[o + n - 1] += qs - qc - qr;
@@ -237,6 +249,10 @@ export class StackWallSystem implements OdeSystem {
         diag.radiationPerMetre[s] = qr;
         diag.sunPerMetre[s] = qs;
         diag.reynoldsInside[s] = reynolds;
+        diag.prandtlInside[s] = props.prandtl;
+        diag.reynoldsOutside[s] = reOut;
+        diag.rayleighOutside[s] = raOut;
+        diag.prandtlOutside[s] = outside.filmCoefficient === undefined ? this.film.prandtl : Number.NaN;
       }
       gasIn = gasOut;
     }

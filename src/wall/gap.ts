@@ -5,7 +5,8 @@
  */
 import { airPropertiesAt, airPropertiesInto } from '../properties/air.ts';
 import { effectiveConductivityRatioAnnulusRaithbyHollands } from '../correlations/enclosure.ts';
-import { STANDARD_GRAVITY, STEFAN_BOLTZMANN } from '../properties/constants.ts';
+import { STANDARD_GRAVITY } from '../properties/constants.ts';
+import { radiationCoefficientConcentricCylinders } from '../correlations/radiation.ts';
 import type { GapLink } from './mesh.ts';
 
 /**
@@ -25,7 +26,6 @@ export function gapConductancePerMetre(gap: GapLink, t1K: number, t2K: number): 
   const rayleigh = (STANDARD_GRAVITY * air.expansion * Math.abs(t1K - t2K) * width ** 3) / (air.kinematicViscosity * diffusivity);
   const ratio = effectiveConductivityRatioAnnulusRaithbyHollands(2 * r1, 2 * r2, rayleigh, air.prandtl);
   const conduction = (2 * Math.PI * air.conductivity * ratio) / Math.log(r2 / r1);
-  const radiationCoefficient =
-    (STEFAN_BOLTZMANN * (t1K * t1K + t2K * t2K) * (t1K + t2K)) / (1 / gap.innerEmissivity + (r1 / r2) * (1 / gap.outerEmissivity - 1));
+  const radiationCoefficient = radiationCoefficientConcentricCylinders(t1K, t2K, gap.innerEmissivity, gap.outerEmissivity, r1, r2);
   return conduction + 2 * Math.PI * r1 * radiationCoefficient;
 }

@@ -63,13 +63,13 @@ export function thermalDiffusivity(material: Material, temperatureK: number): nu
 }
 
 /**
- * Automatic cell count of a layer: cells no thicker than a fifth of the daily penetration depth
+ * Automatic cell count of a layer: cells no thicker than an eighth of the daily penetration depth
  * δ = √(2α/ω) = √(α P / π) (Carslaw & Jaeger 1959, §2.6), at least 2 and at most 24.
  */
 export function autoCellCount(material: Material, thickness: number): number {
   const alpha = thermalDiffusivity(material, 400);
   const depth = Math.sqrt((alpha * SECONDS_PER_DAY) / Math.PI);
-  return Math.min(24, Math.max(2, Math.ceil(thickness / (depth / 5))));
+  return Math.min(24, Math.max(2, Math.ceil(thickness / (depth / 8))));
 }
 
 /** Build the mesh for the wall layers (inside → outside) starting at the flue radius `innerRadius`. */
