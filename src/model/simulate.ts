@@ -116,7 +116,9 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   const totalDays = run.length.kind === 'days' ? run.length.days : run.length.maxDays;
 
   // ---- initial state ----
+  const initialStarted = performance.now();
   let y = initialState(prep, t0);
+  const initialStateMs = performance.now() - initialStarted;
 
   // ---- stops ----
   const dayStops = (d: number): { stops: number[]; isOutput: Set<number> } => {
@@ -238,7 +240,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     daysSimulated: daysDone,
     periodic,
     firingStartT: run.mode === 'warmup' ? t0 : null,
-    integrator: { name: run.integrator, ...stats, computeMs: performance.now() - started },
+    integrator: { name: run.integrator, ...stats, computeMs: performance.now() - started, initialStateMs },
     warnings: rec.validityWarnings(),
   };
 }

@@ -77,7 +77,7 @@ export interface RunResult {
   readonly periodic: { readonly reached: boolean; readonly lastChangeK: number; readonly toleranceK: number; readonly changeByDayK: readonly number[] } | null;
   /** Run time of firing start (warm-up studies). */
   readonly firingStartT: number | null;
-  readonly integrator: { readonly name: string; readonly steps: number; readonly rejected: number; readonly rhsEvaluations: number; readonly computeMs: number };
+  readonly integrator: { readonly name: string; readonly steps: number; readonly rejected: number; readonly rhsEvaluations: number; readonly computeMs: number; readonly initialStateMs: number };
   /** Warnings gathered during the run (validity ranges, clamped values). */
   readonly warnings: readonly string[];
 }

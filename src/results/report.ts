@@ -134,7 +134,7 @@ function verdictSection(summary: Summary): string {
     return `<tr class="verdict status-${v.status}" data-limit="${esc(v.limit)}" data-status="${esc(v.status)}">${td(`<span class="badge">${STATUS_MARK[v.status]} ${STATUS_WORD[v.status]}</span>`, 'status')}${td(`${esc(v.title)}<div class="note">${esc(v.detail)}</div>`)}${td(gov, 'n')}${td(limit, 'n')}${td(esc(when(v.time_local)))}${td(v.height_m === null ? '–' : num(v.height_m, 1), 'n')}</tr>`;
   });
   const fails = summary.verdicts.filter((v) => v.status === 'fail').length;
-  const overall = fails === 0 ? `<p class="overall ok"><strong>ALL SET LIMITS PASS.</strong></p>` : `<p class="overall bad"><strong>${fails} LIMIT${fails > 1 ? 'S' : ''} FAIL.</strong></p>`;
+  const overall = fails === 0 ? `<p class="overall ok"><strong>ALL SET LIMITS PASS.</strong></p>` : `<p class="overall bad"><strong>${fails === 1 ? 'ONE LIMIT FAILS' : `${fails} LIMITS FAIL`}.</strong></p>`;
   return `<section id="verdicts"><h2>Verdicts</h2>
 ${overall}
 ${table(['Status', 'Limit', 'Governing figure', 'Limit value', 'When (local)', 'Height (m)'], rows, 'verdicts')}

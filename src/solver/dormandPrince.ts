@@ -27,7 +27,7 @@ import {
   tooManySteps,
   validateProblem,
   weightedRmsNorm,
-} from './trbdf2.ts';
+} from './stepping.ts';
 
 // Nodes c_i.
 const C2 = 1 / 5;

@@ -69,11 +69,14 @@ export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
     },
     dayIndex: (t) => Math.floor(t / SECONDS_PER_DAY + 1e-9),
     isoLocal(t) {
-      const dt = local(Math.round(t));
-      const off = -dt.getTimezoneOffset();
+      // local wall-clock fields from the UTC instant shifted by the zone's offset at that instant
+      const utc = startUtcMs + Math.round(t) * 1000;
+      const offMs = offsetMs(utc);
+      const d = new Date(utc + offMs);
+      const off = Math.round(offMs / 60_000);
       const sign = off >= 0 ? '+' : '-';
       const p2 = (n: number) => String(Math.trunc(Math.abs(n))).padStart(2, '0');
-      return `${dt.getFullYear()}-${p2(dt.getMonth() + 1)}-${p2(dt.getDate())}T${p2(dt.getHours())}:${p2(dt.getMinutes())}:${p2(dt.getSeconds())}${sign}${p2(off / 60)}:${p2(off % 60)}`;
+      return `${d.getUTCFullYear()}-${p2(d.getUTCMonth() + 1)}-${p2(d.getUTCDate())}T${p2(d.getUTCHours())}:${p2(d.getUTCMinutes())}:${p2(d.getUTCSeconds())}${sign}${p2(off / 60)}:${p2(off % 60)}`;
     },
     month: (t) => local(t).getMonth() + 1,
     runTimeOfLocal(dayIndex, secondsOfDay) {
@@ -89,10 +92,15 @@ export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
 
 /** True when `timeZone` is an IANA zone known to this Node runtime. */
 export function isValidTimeZone(timeZone: string): boolean {
+  if (KNOWN_ZONES.has(timeZone)) return true;
   try {
     new Intl.DateTimeFormat('en-US', { timeZone });
+    KNOWN_ZONES.add(timeZone);
     return true;
   } catch {
     return false;
   }
 }
+
+/** Zones already checked (constructing a formatter to check one is slow). */
+const KNOWN_ZONES = new Set<string>();
