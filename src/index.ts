@@ -66,6 +66,8 @@ export interface WriteOptions {
   /** Chart size in pixels (default 1000 × 600). */
   readonly chartWidth?: number;
   readonly chartHeight?: number;
+  /** Heights (m) for the temperature-through-the-day charts (default: top and bottom segments). */
+  readonly chartHeightsM?: readonly number[];
 }
 
 /** The files of a run, in memory. */
@@ -78,7 +80,11 @@ export async function runArtefacts(run: Run, options: WriteOptions = {}): Promis
   if (options.charts !== false) {
     const { renderAllCharts } = await import('./charts/index.ts');
     const { renderReportHtml } = await import('./results/report.ts');
-    const charts = renderAllCharts(run.result.series, run.summary, run.inputs, { width: options.chartWidth ?? 1000, height: options.chartHeight ?? 600 });
+    const charts = renderAllCharts(run.result.series, run.summary, run.inputs, {
+      width: options.chartWidth ?? 1000,
+      height: options.chartHeight ?? 600,
+      heightsToPlot: options.chartHeightsM,
+    });
     for (const c of charts) artefacts.push({ fileName: c.fileName, content: c.png });
     artefacts.push({ fileName: 'report.html', content: renderReportHtml(run.summary, run.inputs, charts) });
   }

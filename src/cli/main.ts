@@ -31,6 +31,7 @@ interface RunOptions {
   integrator?: 'implicit' | 'rk45';
   charts: boolean;
   chartSize: string;
+  chartHeights?: string;
   strict?: boolean;
   quiet?: boolean;
   json?: boolean;
@@ -42,6 +43,13 @@ function parseChartSize(text: string): { width: number; height: number } {
   const m = /^(\d{3,4})x(\d{3,4})$/.exec(text);
   if (!m) throw new BadInput(`--chart-size: found "${text}"; expected WIDTHxHEIGHT in pixels, e.g. 1200x700 (100 to 9999)`);
   return { width: Number(m[1]), height: Number(m[2]) };
+}
+
+function parseHeights(text: string): number[] {
+  const values = text.split(',').map((v) => Number(v.trim()));
+  if (values.length === 0 || values.some((v) => !Number.isFinite(v) || v < 0))
+    throw new BadInput(`--chart-heights: found "${text}"; expected heights in m separated by commas, e.g. 5,20,40`);
+  return values;
 }
 
 /** Apply command-line overrides to the validated inputs. */
@@ -69,6 +77,7 @@ function withOverrides(loaded: LoadedScenario, opts: RunOptions, mode: 'cycle' |
 
 async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmup' | null): Promise<number> {
   const chartSize = parseChartSize(opts.chartSize);
+  const chartHeights = opts.chartHeights === undefined ? undefined : parseHeights(opts.chartHeights);
   const loaded = withOverrides(loadScenarioFile(file), opts, mode);
   const outDir = resolve(opts.out ?? join('out', loaded.inputs.name));
   const showProgress = !opts.quiet && process.stderr.isTTY;
@@ -89,7 +98,7 @@ async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmu
   } finally {
     bar?.stop();
   }
-  await writeRun(run, outDir, { charts: opts.charts, chartWidth: chartSize.width, chartHeight: chartSize.height });
+  await writeRun(run, outDir, { charts: opts.charts, chartWidth: chartSize.width, chartHeight: chartSize.height, chartHeightsM: chartHeights });
   if (opts.json) process.stdout.write(`${JSON.stringify(run.summary, null, 2)}\n`);
   else if (!opts.quiet) process.stdout.write(`${resultSheet(run.summary, outDir).join('\n')}\n`);
   if (opts.strict && !run.summary.all_limits_pass) {
@@ -107,6 +116,7 @@ function addRunOptions(cmd: Command): Command {
     .option('--days <n>', 'simulate this many days (overrides run.days)')
     .option('--no-charts', 'skip the PNG charts and report.html')
     .option('--chart-size <WxH>', 'chart size in pixels', '1000x600')
+    .option('--chart-heights <m,...>', 'heights in m for the temperature-through-the-day charts (default: top and bottom)')
     .option('--strict', 'exit with code 3 when any limit fails')
     .option('-q, --quiet', 'print nothing but errors')
     .option('--json', 'print summary.json to standard output instead of the result sheet');

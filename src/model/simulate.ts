@@ -184,13 +184,12 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     const dayStates: Float64Array[] = [y.slice()];
     let result;
     try {
-      result = integrate(system, y, dayStart, stops, { ...tolerances, initialStep: lastStep }, (t, state, auxInt) => {
+      result = integrate(system, y, dayStart, stops, { ...tolerances, initialStep: lastStep }, (t, state) => {
         if (isOutput.has(t)) {
           record(t, state, d);
           if (!keepAllDays) dayStates.push(state.slice());
         }
         if (options.onProgress) options.onProgress((d + (t - dayStart) / SECONDS_PER_DAY) / totalDays);
-        void auxInt;
       });
     } catch (e) {
       if (e instanceof IntegrationError) {

@@ -12,13 +12,13 @@ import type { Material, PropertyTable } from '../materials/types.ts';
 import { findMaterial, suggestMaterial } from '../materials/index.ts';
 import { validateTable } from '../properties/table.ts';
 import { airPressureAtElevation } from '../properties/air.ts';
-import { KELVIN_OFFSET, SECONDS_PER_DAY } from '../properties/constants.ts';
+import { KELVIN_OFFSET, SECONDS_PER_DAY, MOLAR_MASS_AIR } from '../properties/constants.ts';
 import { makeSiteClock, isValidTimeZone } from '../sun/clock.ts';
 import { TERRAIN_EXPONENTS } from '../weather/wind.ts';
 import { parseWeatherCsv, WeatherFileError } from '../weather/csvFile.ts';
-import { FUELS, fuelByName } from '../flue/fuels.ts';
-import { flueGasFromFuel, flueGasFromVolumeFractions } from '../flue/combustion.ts';
-import { validateFiringSchedule, type FiringScheduleSpec } from '../flue/schedule.ts';
+import { FUELS, fuelByName, validateUltimateAnalysis } from '../flue/fuels.ts';
+import { flueGasFromFuel, flueGasFromVolumeFractions, molarMass } from '../flue/combustion.ts';
+import { validateFiringSchedule, massFlowFromNormalVolumeFlow, type FiringScheduleSpec } from '../flue/schedule.ts';
 
 export interface LoadedScenario {
   /** The validated scenario, as written (SI values). */
@@ -146,15 +146,35 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
     }
   }
 
-  // ---- flue ----
-  const toPoints = (pts: readonly { time: number; gas_temperature: number; mass_flow: number }[]): FiringPointInput[] =>
-    pts.map((p) => ({ clockS: p.time, inletTemperatureK: p.gas_temperature, massFlow: p.mass_flow }));
+  // ---- flue gas ----
+  let composition: GasCompositionInput | null = null;
+  const g = s.flue.gas;
+  if (g.fuel !== undefined) {
+    if (!(g.fuel in FUELS)) problems.push(`flue.gas.fuel: found "${g.fuel}"; expected one of ${Object.keys(FUELS).join(', ')}`);
+    else composition = flueGasFromFuel(fuelByName(g.fuel), g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
+  } else if (g.fuel_analysis) {
+    const issues = validateUltimateAnalysis(g.fuel_analysis);
+    if (issues.length > 0) problems.push(...issues.map((i) => `flue.gas.fuel_analysis: ${i}`));
+    else composition = flueGasFromFuel(g.fuel_analysis, g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
+  } else if (g.composition) {
+    const k = g.composition;
+    const sum = k.N2 + k.O2 + k.CO2 + k.H2O;
+    if (Math.abs(sum - 1) > 0.02) problems.push(`flue.gas.composition: found fractions summing to ${sum.toFixed(3)}; expected N2 + O2 + CO2 + H2O = 1 (within 0.02)`);
+    else composition = flueGasFromVolumeFractions({ N2: k.N2, O2: k.O2, CO2: k.CO2, H2O: k.H2O, SO2: k.SO2_ppm * 1e-6, SO3Ppm: k.SO3_ppm });
+  }
+
+  // ---- firing schedule ----
+  // volume flows at normal conditions become mass flows with the flue gas's molar mass
+  const gasMolarMass = composition ? molarMass(composition) : MOLAR_MASS_AIR;
+  const massFlowOf = (p: { mass_flow?: number; volume_flow?: number }) => p.mass_flow ?? massFlowFromNormalVolumeFlow((p.volume_flow ?? 0) * 3600, gasMolarMass);
+  const toPoints = (pts: readonly { time: number; gas_temperature: number; mass_flow?: number; volume_flow?: number }[]): FiringPointInput[] =>
+    pts.map((p) => ({ clockS: p.time, inletTemperatureK: p.gas_temperature, massFlow: massFlowOf(p) }));
   const schedule = s.flue.schedule.daily ? { daily: toPoints(s.flue.schedule.daily) } : { perDay: (s.flue.schedule.per_day ?? []).map(toPoints) };
   const dayLists = s.flue.schedule.daily ? [['daily', s.flue.schedule.daily] as const] : (s.flue.schedule.per_day ?? []).map((d, i) => [`per_day[${i}]`, d] as const);
   let largestFlow = 0;
   for (const [where, pts] of dayLists) {
     pts.forEach((p, i) => {
-      largestFlow = Math.max(largestFlow, p.mass_flow);
+      largestFlow = Math.max(largestFlow, massFlowOf(p));
       if (i === 0) return;
       const prev = pts[i - 1]!.time;
       const hhmm = (x: number) => `${String(Math.floor(x / 3600)).padStart(2, '0')}:${String(Math.floor((x % 3600) / 60)).padStart(2, '0')}`;
@@ -166,18 +186,6 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   if (largestFlow === 0 && !(s.flue.off_mass_flow && s.flue.off_mass_flow > 0))
     problems.push('flue.schedule: found every mass_flow 0; expected some flow, or flue.off_mass_flow for the natural draft with the burner off');
   if (problems.length === 0) for (const msg of validateFiringSchedule({ ...schedule, minimumMassFlow: s.flue.off_mass_flow } as FiringScheduleSpec)) problems.push(`flue.schedule: ${msg}`);
-
-  let composition: GasCompositionInput | null = null;
-  const g = s.flue.gas;
-  if (g.fuel !== undefined) {
-    if (!(g.fuel in FUELS)) problems.push(`flue.gas.fuel: found "${g.fuel}"; expected one of ${Object.keys(FUELS).join(', ')}`);
-    else composition = flueGasFromFuel(fuelByName(g.fuel), g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
-  } else if (g.composition) {
-    const k = g.composition;
-    const sum = k.N2 + k.O2 + k.CO2 + k.H2O;
-    if (Math.abs(sum - 1) > 0.02) problems.push(`flue.gas.composition: found fractions summing to ${sum.toFixed(3)}; expected N2 + O2 + CO2 + H2O = 1 (within 0.02)`);
-    else composition = flueGasFromVolumeFractions({ N2: k.N2, O2: k.O2, CO2: k.CO2, H2O: k.H2O, SO2: k.SO2_ppm * 1e-6, SO3Ppm: k.SO3_ppm });
-  }
 
   // ---- run ----
   if (s.run.mode === 'warmup' && s.run.firing_start === undefined)

@@ -161,15 +161,34 @@ const weather = z
       ctx.issues.push({ code: 'custom', input: v, path: [], message: 'found ' + (v.file ? 'both design_day and file' : 'neither design_day nor file') + '; expected exactly one of them' });
   });
 
-const firingPoint = z.strictObject({
-  time: clockTime,
-  gas_temperature: temperature('Gas temperature at the stack inlet'),
-  mass_flow: quantity('massFlow', { min: 0, max: 2000, wording: 'a mass flow from 0 to 2000 kg/s' }, 'Flue gas mass flow'),
-});
+const firingPoint = z
+  .strictObject({
+    time: clockTime,
+    gas_temperature: temperature('Gas temperature at the stack inlet'),
+    mass_flow: quantity('massFlow', { min: 0, max: 2000, wording: 'a mass flow from 0 to 2000 kg/s' }, 'Flue gas mass flow').optional(),
+    volume_flow: quantity('volumeFlow', { min: 0, max: 2000, wording: 'a volume flow from 0 to 7.2 million Nm³/h' }, 'Flue gas volume flow at normal conditions (0 °C, 101.325 kPa), instead of mass_flow').optional(),
+  })
+  .check((ctx) => {
+    const v = ctx.value;
+    if ((v.mass_flow === undefined) === (v.volume_flow === undefined))
+      ctx.issues.push({ code: 'custom', input: v, path: [], message: `found ${v.mass_flow === undefined ? 'neither mass_flow nor volume_flow' : 'both mass_flow and volume_flow'}; expected exactly one of them` });
+  });
 
 const gas = z
   .strictObject({
     fuel: z.string().optional().meta({ description: 'Fuel name (natural-gas, light-fuel-oil, heavy-fuel-oil, bituminous-coal, wood); the flue gas follows by stoichiometry.' }),
+    fuel_analysis: z
+      .strictObject({
+        C: ratio(0, 1, 'a mass fraction', 'Carbon'),
+        H: ratio(0, 1, 'a mass fraction', 'Hydrogen'),
+        O: ratio(0, 1, 'a mass fraction', 'Oxygen'),
+        N: ratio(0, 1, 'a mass fraction', 'Nitrogen'),
+        S: ratio(0, 1, 'a mass fraction', 'Sulfur'),
+        moisture: ratio(0, 1, 'a mass fraction', 'Moisture'),
+        ash: ratio(0, 1, 'a mass fraction', 'Ash'),
+      })
+      .optional()
+      .meta({ description: 'Your own fuel: ultimate analysis as fired, mass fractions summing to 1 (instead of fuel).' }),
     excess_air: ratio(0, 5, 'a fraction', 'Excess air as a fraction of stoichiometric air (0.15 = 15 %)').optional(),
     sulfur_to_so3: ratio(0, 0.2, 'a fraction', 'Fraction of the fuel sulfur converted to SO3').optional(),
     air_humidity: ratio(0, 0.1, 'kg water per kg dry air', 'Humidity of the combustion air').optional(),
@@ -187,9 +206,10 @@ const gas = z
   })
   .check((ctx) => {
     const v = ctx.value;
-    if ((v.fuel === undefined) === (v.composition === undefined))
-      ctx.issues.push({ code: 'custom', input: v, path: [], message: `found ${v.fuel ? 'both fuel and composition' : 'neither fuel nor composition'}; expected exactly one of them` });
-    else if (v.fuel !== undefined && v.excess_air === undefined)
+    const given = (['fuel', 'fuel_analysis', 'composition'] as const).filter((k) => v[k] !== undefined);
+    if (given.length !== 1)
+      ctx.issues.push({ code: 'custom', input: v, path: [], message: `found ${given.length === 0 ? 'none' : given.join(' and ')} of fuel, fuel_analysis and composition; expected exactly one of them` });
+    else if (given[0] !== 'composition' && v.excess_air === undefined)
       ctx.issues.push({ code: 'custom', input: v, path: ['excess_air'], message: 'missing; expected the excess air as a fraction (0.15 = 15 %) with a fuel' });
   });
 

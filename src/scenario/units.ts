@@ -25,6 +25,8 @@ export const QUANTITY_KINDS = {
   temperatureDifference: { what: 'a temperature difference', plainUnit: 'K', siUnit: 'degK', plainToSi: (v) => v },
   speed: { what: 'a speed', plainUnit: 'm/s', siUnit: 'm/s', plainToSi: (v) => v },
   massFlow: { what: 'a mass flow', plainUnit: 'kg/s', siUnit: 'kg/s', plainToSi: (v) => v },
+  /** Volume flow at normal conditions (0 °C, 101.325 kPa); SI m³/s. */
+  volumeFlow: { what: 'a volume flow at normal conditions (0 °C, 101.325 kPa)', plainUnit: 'Nm³/h', siUnit: 'm^3/s', plainToSi: (v) => v / 3600 },
   filmCoefficient: { what: 'a film coefficient', plainUnit: 'W/(m²·K)', siUnit: 'W/m^2*degK', plainToSi: (v) => v },
   contactResistance: { what: 'a contact resistance', plainUnit: 'm²·K/W', siUnit: 'm^2*degK/W', plainToSi: (v) => v },
   stress: { what: 'a stress', plainUnit: 'MPa', siUnit: 'Pa', plainToSi: (v) => v * 1e6 },
@@ -47,6 +49,7 @@ export function normaliseUnitText(text: string, absoluteTemperature: boolean): s
   const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
   if (!m) return text;
   let unit = m[2]!;
+  unit = unit.replace(/\bNm(?=[\^³23])/g, 'm').replace(/³/g, '^3').replace(/²/g, '^2');
   unit = unit.replace(/°\s*C\b/g, 'degC').replace(/°\s*F\b/g, 'degF').replace(/°\s*K\b/g, 'degK').replace(/\bcelsius\b/gi, 'degC');
   unit = unit.replace(/(^|[^A-Za-z])K(?![A-Za-z])/g, '$1degK');
   unit = unit.replace(/([A-Za-z])([23])(?![\d.])/g, '$1^$2');
@@ -73,6 +76,7 @@ const EXAMPLES: Partial<Record<QuantityKindName, string>> = {
   temperatureDifference: '5 K',
   speed: '12 km/h',
   massFlow: '9000 kg/h',
+  volumeFlow: '12000 Nm^3/h',
   filmCoefficient: '25 W/(m^2 K)',
   contactResistance: '0.002 m^2 K/W',
   stress: '4 MPa',

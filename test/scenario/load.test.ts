@@ -58,3 +58,35 @@ describe('loading', () => {
     expect(JSON.stringify(schema.properties.stack.properties.height)).toMatch(/plain number in m/);
   });
 });
+
+describe('flue gas inputs', () => {
+  const raw = () => parse(readFileSync('scenarios/demo.yaml', 'utf8'));
+
+  it('turns a volume flow at normal conditions into a mass flow with the gas molar mass (ideal gas at 0 °C, 101.325 kPa)', () => {
+    const s = raw();
+    s.flue.gas = { composition: { N2: 0.75, O2: 0.05, CO2: 0.1, H2O: 0.1 } };
+    s.flue.schedule.daily = [{ time: '00:00', gas_temperature: 200, volume_flow: '10000 Nm^3/h' }];
+    const { inputs } = validateScenario(s);
+    // molar mass by hand: 0.75·28.0134 + 0.05·31.9988 + 0.10·44.0095 + 0.10·18.0153 g/mol (IUPAC atomic weights)
+    const m = (0.75 * 28.0134 + 0.05 * 31.9988 + 0.1 * 44.0095 + 0.1 * 18.0153) / 1000;
+    const rhoN = (101325 * m) / (8.314462618 * 273.15);
+    const points = 'daily' in inputs.flue.schedule ? inputs.flue.schedule.daily : [];
+    // 0.1 %: the program's molar masses may differ from these in the fourth figure
+    expect(points[0]!.massFlow / ((10000 / 3600) * rhoN)).toBeCloseTo(1, 3);
+  });
+
+  it('accepts a user fuel analysis and rejects one that does not sum to 1', () => {
+    const s = raw();
+    s.flue.gas = { fuel_analysis: { C: 0.5, H: 0.06, O: 0.38, N: 0.005, S: 0.0005, moisture: 0.05, ash: 0.0045 }, excess_air: 0.4 };
+    const { inputs } = validateScenario(s);
+    expect(inputs.flue.composition.CO2).toBeGreaterThan(0.05);
+    s.flue.gas.fuel_analysis.C = 0.7;
+    expect(() => validateScenario(s)).toThrow(/flue\.gas\.fuel_analysis: .*sum to/);
+  });
+
+  it('asks for exactly one of fuel, fuel_analysis and composition', () => {
+    const s = raw();
+    s.flue.gas = { excess_air: 0.2 };
+    expect(() => validateScenario(s)).toThrow(/flue\.gas: found none of fuel, fuel_analysis and composition/);
+  });
+});
