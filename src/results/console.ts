@@ -82,6 +82,16 @@ export function resultSheet(s: Summary, outDir?: string): string[] {
     lines.push(`  inner surface above water dew point + margin: ${num(w.minutes_to_water_dew, 0)} min`);
     lines.push(`  inner surface above acid dew point + margin:  ${num(w.minutes_to_acid_dew, 0)} min`);
     lines.push(`  shell at 90 % of its rise: ${num(w.minutes_to_shell_90_percent, 0)} min; shell past the touch limit: ${w.minutes_to_shell_touch === null ? 'never' : `${num(w.minutes_to_shell_touch, 0)} min`}`);
+    lines.push('  by height (minutes from firing; — = not within the run):');
+    lines.push(
+      ...table(
+        [
+          ['height m', 'water dew', 'acid dew', 'shell 90 %', 'shell touch'],
+          ...[...s.warmup.by_height].reverse().map((h) => [num(h.height_m), num(h.minutes_to_water_dew, 0), num(h.minutes_to_acid_dew, 0), num(h.minutes_to_shell_90_percent, 0), num(h.minutes_to_shell_touch, 0)]),
+        ],
+        ['r', 'r', 'r', 'r', 'r'],
+      ).map((l) => `    ${l}`),
+    );
   }
   lines.push('');
   lines.push('HEAT (per day)');

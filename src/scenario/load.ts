@@ -134,7 +134,8 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       if (clock) {
         try {
           const src = parseWeatherCsv(text, clock, s.weather.file, { referenceHeightM: refHeight });
-          const days = s.run.days === 'until-periodic' ? s.run.max_days : s.run.days;
+          // a periodic study repeats the first day, so only that day must be covered
+          const days = s.run.days === 'until-periodic' ? 1 : s.run.days;
           const startT = s.run.mode === 'warmup' && s.run.firing_start !== undefined ? clock.runTimeOfLocal(0, s.run.firing_start) : 0;
           const cover = src.coversRange(clock.utcMs(startT), clock.utcMs(startT + days * SECONDS_PER_DAY));
           if (!cover.covered) problems.push(`weather.file: ${cover.message}`);
@@ -150,7 +151,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   let composition: GasCompositionInput | null = null;
   const g = s.flue.gas;
   if (g.fuel !== undefined) {
-    if (!(g.fuel in FUELS)) problems.push(`flue.gas.fuel: found "${g.fuel}"; expected one of ${Object.keys(FUELS).join(', ')}`);
+    if (!Object.hasOwn(FUELS, g.fuel)) problems.push(`flue.gas.fuel: found "${g.fuel}"; expected one of ${Object.keys(FUELS).join(', ')}`);
     else composition = flueGasFromFuel(fuelByName(g.fuel), g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
   } else if (g.fuel_analysis) {
     const issues = validateUltimateAnalysis(g.fuel_analysis);

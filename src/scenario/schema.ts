@@ -5,6 +5,9 @@
  */
 import { z } from 'zod';
 import { parseQuantity, parseClockTime, describeExpected, QUANTITY_KINDS, type QuantityKindName } from './units.ts';
+import { findMaterial, suggestMaterial } from '../materials/index.ts';
+import { FUELS } from '../flue/fuels.ts';
+import { isValidTimeZone } from '../sun/clock.ts';
 
 interface Bounds {
   /** Smallest allowed SI value (inclusive unless `exclusiveMin`). */
@@ -76,7 +79,13 @@ const site = z.strictObject({
   latitude: ratio(-90, 90, 'degrees north', 'Latitude, degrees north (negative south)'),
   longitude: ratio(-180, 180, 'degrees east', 'Longitude, degrees east (negative west)'),
   elevation: quantity('length', { min: -500, max: 9000, wording: 'an elevation between -500 m and 9000 m' }, 'Elevation above sea level').default(0),
-  time_zone: z.string().meta({ description: 'IANA time zone of the site, e.g. "Europe/Oslo".' }),
+  time_zone: z
+    .string()
+    .meta({ description: 'IANA time zone of the site, e.g. "Europe/Oslo".' })
+    .check((ctx) => {
+      if (!isValidTimeZone(ctx.value))
+        ctx.issues.push({ code: 'custom', input: ctx.value, message: `found "${ctx.value}"; expected an IANA time zone such as "Europe/Oslo" or "America/Chicago"` });
+    }),
   first_day: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'expected a date "YYYY-MM-DD"').meta({ description: 'First simulated day, local date "YYYY-MM-DD".' }),
   ground_reflectance: ratio(0, 1, 'a fraction', 'Solar reflectance (albedo) of the ground around the stack').default(0.2),
   terrain: z
@@ -109,7 +118,21 @@ const inlineMaterial = z.strictObject({
 
 const layer = z.strictObject({
   label: z.string().min(1).optional().meta({ description: 'Label for reports, e.g. "liner". Default: the material name.' }),
-  material: z.union([z.string().meta({ description: 'Name of a material in the library (`stackday materials`).' }), inlineMaterial]),
+  material: z.union([
+    z
+      .string()
+      .meta({ description: 'Name of a material in the library (`stackday materials`).' })
+      .check((ctx) => {
+        if (findMaterial(ctx.value)) return;
+        const hint = suggestMaterial(ctx.value);
+        ctx.issues.push({
+          code: 'custom',
+          input: ctx.value,
+          message: `found "${ctx.value}"; expected a material from the library${hint ? ` (did you mean "${hint}"?)` : ''}; \`stackday materials\` lists them`,
+        });
+      }),
+    inlineMaterial,
+  ]),
   thickness: positiveLength('Layer thickness'),
   cells: z.union([z.literal('auto'), count(1, 200, 'Finite-volume cells across the layer')]).default('auto'),
   contact_resistance: quantity('contactResistance', { min: 0, wording: 'a contact resistance of zero or more' }, 'Contact resistance to the next layer outward').default(0),
@@ -176,7 +199,13 @@ const firingPoint = z
 
 const gas = z
   .strictObject({
-    fuel: z.string().optional().meta({ description: 'Fuel name (natural-gas, light-fuel-oil, heavy-fuel-oil, bituminous-coal, wood); the flue gas follows by stoichiometry.' }),
+    fuel: z
+      .string()
+      .meta({ description: 'Fuel name (natural-gas, light-fuel-oil, heavy-fuel-oil, bituminous-coal, wood); the flue gas follows by stoichiometry.' })
+      .check((ctx) => {
+        if (!Object.hasOwn(FUELS, ctx.value)) ctx.issues.push({ code: 'custom', input: ctx.value, message: `found "${ctx.value}"; expected one of ${Object.keys(FUELS).join(', ')}` });
+      })
+      .optional(),
     fuel_analysis: z
       .strictObject({
         C: ratio(0, 1, 'a mass fraction', 'Carbon'),

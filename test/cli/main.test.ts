@@ -93,9 +93,20 @@ describe('bad input', () => {
       s.surface.emissivity = -1;
       s.site.latitude = 91;
       s.stack.layers[0].thickness = 0;
+      s.site.time_zone = 'Europe/Copenhagn';
+      s.stack.layers[1].material = 'calcium-silicat';
+      s.flue.gas.fuel = 'heavy-oil';
     });
-    const r = await expectBadInput(['run', file], /surface\.emissivity/, /site\.latitude/, /stack\.layers\[0\]\.thickness/);
-    expect(r.stderr).toMatch(/3 problems/);
+    const r = await expectBadInput(
+      ['run', file],
+      /surface\.emissivity/,
+      /site\.latitude/,
+      /stack\.layers\[0\]\.thickness/,
+      /site\.time_zone: found "Europe\/Copenhagn"/,
+      /stack\.layers\[1\]\.material: found "calcium-silicat".*did you mean "calcium-silicate"/,
+      /flue\.gas\.fuel: found "heavy-oil"; expected one of/,
+    );
+    expect(r.stderr).toMatch(/6 problems/);
   });
 
   it('a schedule whose times go backwards', async () => {
