@@ -104,10 +104,9 @@ function makeWeather(inputs: ModelInputs, clock: ReturnType<typeof makeSiteClock
 export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): RunResult {
   const started = performance.now();
   const prep = prepareModel(inputs);
-  const { system, mesh, geometry, ctx } = prep;
+  const { system, geometry, ctx } = prep;
   const { clock } = ctx;
   const run = inputs.run;
-  const n = mesh.nodeCount;
   const S = geometry.segments;
   const integrate = INTEGRATORS[run.integrator];
   const tolerances = { rtol: run.rtol, atol: run.atol, maxStep: Math.min(run.outputInterval, 3600) };

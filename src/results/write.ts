@@ -44,7 +44,7 @@ export function segmentsCsv(series: TimeSeries): string {
   const g = series.segment;
   const inst = series.instant;
   const rows: string[] = [
-    'time,hours,height_m,air_temperature_c,wind_speed_at_height_m_s,sun_altitude_deg,sun_azimuth_deg,absorbed_sun_w_per_m,outside_film_w_m2_k,sky_temperature_c,convection_loss_w_per_m,radiation_loss_w_per_m,gas_in_c,gas_out_c,inside_film_w_m2_k,gas_to_wall_w_per_m,water_dew_margin_k,acid_dew_margin_k,inlet_gas_c,mass_flow_kg_s,firing,draft_pa\n',
+    'time,hours,height_m,air_temperature_c,wind_speed_at_height_m_s,sun_altitude_deg,sun_azimuth_deg,absorbed_sun_w_per_m,outside_film_w_m2_k,sky_temperature_c,convection_loss_w_per_m,radiation_loss_w_per_m,gas_in_c,gas_out_c,inside_film_w_m2_k,gas_to_wall_w_per_m,water_dew_point_c,water_dew_margin_k,acid_dew_point_c,acid_dew_margin_k,inlet_gas_c,mass_flow_kg_s,firing,draft_pa\n',
   ];
   for (let k = 0; k < series.t.length; k++) {
     const head = `${series.isoLocal[k]},${fmt((series.t[k]! - t0) / 3600, 4)},`;
@@ -69,7 +69,9 @@ export function segmentsCsv(series: TimeSeries): string {
           fmt(g.gasOutK[j]! - KELVIN_OFFSET, 2),
           fmt(g.insideFilm[j]!, 3),
           fmt(g.gasToWallPerMetre[j]!, 2),
+          fmt(series.waterDewPointK - KELVIN_OFFSET, 2),
           fmt(g.waterDewMarginK[j]!, 3),
+          fmt(series.acidDewPointK === null ? Number.NaN : series.acidDewPointK - KELVIN_OFFSET, 2),
           fmt(g.acidDewMarginK[j]!, 3),
         ].join(',') +
         ',' +

@@ -36,7 +36,7 @@
  * No allocation per step: all work arrays are allocated once per call.
  */
 import { IntegrationError } from './types.ts';
-import type { Integrator, IntegratorOptions, IntegratorStats, OdeSystem } from './types.ts';
+import type { Integrator } from './types.ts';
 import { solveTridiagonal } from './tridiagonal.ts';
 import {
   checkStepSize,

@@ -1,11 +1,5 @@
 import { describe, it, expect, beforeAll } from 'vitest';
 import type { ChartConfiguration } from 'chart.js';
-import { loadScenarioFile } from '../../src/scenario/load.ts';
-import { simulate } from '../../src/model/simulate.ts';
-import { summarise } from '../../src/results/metrics.ts';
-import type { ModelInputs } from '../../src/model/inputs.ts';
-import type { RunResult } from '../../src/model/timeseries.ts';
-import type { Summary } from '../../src/results/summary.ts';
 import { KELVIN_OFFSET } from '../../src/properties/constants.ts';
 import {
   acidMarginMap, chartTypography, clockHours, gasAlongHeight, marginClassOf, marginClasses, niceBounds, outsideHeatFlows,

@@ -1,12 +1,6 @@
 import { describe, it, expect, beforeAll } from 'vitest';
 import { createCanvas, loadImage } from '@napi-rs/canvas';
 import type { ChartConfiguration } from 'chart.js';
-import { loadScenarioFile } from '../../src/scenario/load.ts';
-import { simulate } from '../../src/model/simulate.ts';
-import { summarise } from '../../src/results/metrics.ts';
-import type { ModelInputs } from '../../src/model/inputs.ts';
-import type { RunResult } from '../../src/model/timeseries.ts';
-import type { Summary } from '../../src/results/summary.ts';
 import { renderAllCharts, renderChartPng, MARGIN_CLASS_COLORS, type RenderedChart } from '../../src/charts/index.ts';
 
 import { demoStudy, type Study } from '../support/demoStudy.ts';
