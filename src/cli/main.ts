@@ -203,9 +203,21 @@ export async function main(argv: readonly string[]): Promise<number> {
   }
 }
 
-const invokedDirectly = process.argv[1] !== undefined && /(?:cli[\\/]main\.ts|bin[\\/]stackday(?:\.js)?)$/.test(process.argv[1]);
-if (invokedDirectly) {
-  main(process.argv.slice(2)).then((code) => {
-    process.exitCode = code;
-  });
+/** A reader that stops early (`stackday materials | head`) closes the pipe: end quietly, as Unix tools do. */
+function quietOnClosedPipe(): void {
+  for (const stream of [process.stdout, process.stderr]) {
+    stream.on('error', (e: NodeJS.ErrnoException) => {
+      if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+      throw e;
+    });
+  }
 }
+
+/** Entry point for launchers (bin/stackday.js, `tsx src/cli/main.ts`). */
+export async function runFromCommandLine(): Promise<void> {
+  quietOnClosedPipe();
+  process.exitCode = await main(process.argv.slice(2));
+}
+
+const invokedDirectly = process.argv[1] !== undefined && /cli[\\/]main\.ts$/.test(process.argv[1]);
+if (invokedDirectly) void runFromCommandLine();

@@ -165,3 +165,15 @@ describe('a good run', () => {
     expect((await runCli(['run', '--help'])).code).toBe(0);
   });
 });
+
+describe('the installed command (a real process)', () => {
+  it('prints its version once and exits 0; exits 2 on a missing file', async () => {
+    const { spawnSync } = await import('node:child_process');
+    const v = spawnSync(process.execPath, ['bin/stackday.js', '--version'], { encoding: 'utf8' });
+    expect(v.status).toBe(0);
+    expect(v.stdout).toBe(`${JSON.parse(readFileSync('package.json', 'utf8')).version}\n`);
+    const bad = spawnSync(process.execPath, ['bin/stackday.js', 'run', join(dir, 'missing.yaml')], { encoding: 'utf8' });
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/cannot be read: no such file/);
+  });
+});
