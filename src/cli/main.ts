@@ -15,7 +15,9 @@ import { scenarioJsonSchema } from '../scenario/schema.ts';
 import { SimulationError } from '../model/simulate.ts';
 import { describeMaterialsTable } from '../materials/index.ts';
 import { table } from '../results/console.ts';
-import { resultSheet } from '../results/console.ts';
+import { resultSheet, comparisonSheet } from '../results/console.ts';
+import { compareBuildUps, comparisonCsv } from '../results/compare.ts';
+import { writeArtefactsAtomically } from '../results/write.ts';
 import { parseClockTime } from '../scenario/units.ts';
 import { runScenario, writeRun, VERSION } from '../index.ts';
 import type { ModelInputs } from '../model/inputs.ts';
@@ -145,6 +147,28 @@ export function buildProgram(): Command {
   ).action(async (file: string, opts: RunOptions) => {
     process.exitCode = await runCommand(file, opts, 'warmup');
   });
+  program
+    .command('compare')
+    .argument('<scenarios...>', 'two or more scenario files, one per wall build-up')
+    .description('run several scenarios (wall build-ups) and compare them: which meets every limit, at what heat loss')
+    .option('-o, --out <dir>', 'also write comparison.json and comparison.csv into this folder')
+    .option('--strict', 'exit with code 3 when no build-up meets every limit')
+    .option('--json', 'print the comparison as JSON')
+    .action(async (files: string[], opts: { out?: string; strict?: boolean; json?: boolean }) => {
+      // validate every file before running any: bad input anywhere means nothing runs and nothing is written
+      const loaded = files.map((f) => loadScenarioFile(f));
+      const runs = loaded.map((l) => runScenario(l));
+      const comparison = compareBuildUps(runs.map((r) => r.summary));
+      if (opts.out) {
+        writeArtefactsAtomically(resolve(opts.out), [
+          { fileName: 'comparison.json', content: `${JSON.stringify(comparison, null, 2)}\n` },
+          { fileName: 'comparison.csv', content: comparisonCsv(comparison) },
+        ]);
+      }
+      if (opts.json) process.stdout.write(`${JSON.stringify(comparison, null, 2)}\n`);
+      else process.stdout.write(`${comparisonSheet(comparison, runs[0]!.summary.cautions).join('\n')}\n`);
+      process.exitCode = opts.strict && comparison.recommended === null ? EXIT_LIMIT_FAILED : EXIT_OK;
+    });
   program
     .command('check')
     .argument('<scenario>', 'scenario file (YAML or JSON)')

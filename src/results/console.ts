@@ -3,6 +3,7 @@
  * Plain text, fixed-width columns, readable in any terminal and in a CI log.
  */
 import type { Summary, Verdict } from './summary.ts';
+import type { Comparison } from './compare.ts';
 
 const STATUS_WORD: Record<Verdict['status'], string> = { pass: 'PASS', fail: 'FAIL', 'not-set': '—' };
 
@@ -111,6 +112,41 @@ export function resultSheet(s: Summary, outDir?: string): string[] {
     lines.push('');
     lines.push(`Results written to ${outDir}`);
   }
+  lines.push(rule);
+  return lines;
+}
+
+/** The comparison of several build-ups as lines. */
+export function comparisonSheet(c: Comparison, cautions: readonly string[]): string[] {
+  const lines: string[] = [];
+  const rule = '─'.repeat(78);
+  lines.push(rule);
+  lines.push(`COMPARISON OF ${c.rows.length} BUILD-UPS (choice: ${c.rule})`);
+  lines.push(
+    ...table(
+      [
+        ['', 'scenario', 'limits', 'shell °C', 'lining °C', 'acid margin K', 'σ MPa', 'loss kWh/day'],
+        ...c.rows.map((r) => [
+          r.scenario === c.recommended ? '→' : '',
+          r.scenario,
+          r.all_limits_pass ? 'all pass' : `FAIL: ${r.failed_limits.join(', ')}`,
+          num(r.peak_shell_c),
+          num(r.peak_lining_c),
+          num(r.lowest_acid_dew_margin_k),
+          num(r.max_stress_indicator_mpa, 2),
+          num(r.heat_loss_kwh_per_day),
+        ]),
+      ],
+      ['l', 'l', 'l', 'r', 'r', 'r', 'r', 'r'],
+    ).map((l) => `  ${l}`),
+  );
+  lines.push('');
+  for (const r of c.rows) lines.push(`  ${r.scenario}: ${r.build_up}`);
+  lines.push('');
+  lines.push(c.recommended ? `Meets every limit at the least heat loss: ${c.recommended}` : 'No build-up meets every limit that is set.');
+  lines.push('');
+  lines.push('CAUTIONS');
+  for (const x of cautions) lines.push(`  · ${x}`);
   lines.push(rule);
   return lines;
 }

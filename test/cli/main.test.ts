@@ -177,3 +177,27 @@ describe('the installed command (a real process)', () => {
     expect(bad.stderr).toMatch(/cannot be read: no such file/);
   });
 });
+
+describe('compare', () => {
+  it('runs several build-ups and writes comparison.json and comparison.csv', async () => {
+    const a = scenarioFile('cmp-a', (s) => (s.name = 'cmp-a'));
+    const b = scenarioFile('cmp-b', (s) => {
+      s.name = 'cmp-b';
+      s.stack.layers[1].thickness = '100 mm';
+    });
+    const out = join(dir, 'cmp-out');
+    const r = await runCli(['compare', a, b, '--out', out]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/COMPARISON OF 2 BUILD-UPS/);
+    const c = JSON.parse(readFileSync(join(out, 'comparison.json'), 'utf8'));
+    expect(c.rows.map((x: { scenario: string }) => x.scenario)).toEqual(['cmp-a', 'cmp-b']);
+    // more insulation loses less heat (physics, not a regression value)
+    expect(c.rows[1].heat_loss_kwh_per_day).toBeLessThan(c.rows[0].heat_loss_kwh_per_day);
+  });
+
+  it('runs nothing and writes nothing when any scenario is bad', async () => {
+    const a = scenarioFile('cmp-ok');
+    const bad = scenarioFile('cmp-bad', (s) => (s.surface.emissivity = 2));
+    await expectBadInput(['compare', a, bad], /surface\.emissivity/);
+  });
+});

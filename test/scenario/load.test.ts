@@ -10,7 +10,7 @@ import { scenarioJsonSchema } from '../../src/scenario/schema.ts';
 import { KELVIN_OFFSET } from '../../src/properties/constants.ts';
 
 describe('shipped scenarios', () => {
-  const files = readdirSync('scenarios').filter((f) => f.endsWith('.yaml'));
+  const files = readdirSync('scenarios', { recursive: true, encoding: 'utf8' }).filter((f) => f.endsWith('.yaml'));
   it.each(files)('%s validates', (file) => {
     const loaded = loadScenarioFile(join('scenarios', file));
     expect(loaded.inputs.layers.length).toBeGreaterThan(0);

@@ -1,0 +1,68 @@
+/**
+ * Comparing wall build-ups: the same question asked of several scenarios — which meets every
+ * limit, and at what heat loss? Pure: summaries in, rows and a recommendation out.
+ */
+import type { Summary } from './summary.ts';
+
+export interface ComparisonRow {
+  readonly scenario: string;
+  /** Layers inside → outside, e.g. `50 mm dense-castable | 40 mm calcium-silicate | 8 mm carbon-steel`. */
+  readonly build_up: string;
+  readonly all_limits_pass: boolean;
+  /** Limits that fail (empty when all pass). */
+  readonly failed_limits: readonly string[];
+  readonly peak_shell_c: number;
+  readonly peak_lining_c: number;
+  readonly lowest_acid_dew_margin_k: number | null;
+  readonly lowest_water_dew_margin_k: number;
+  readonly max_stress_indicator_mpa: number | null;
+  readonly heat_loss_kwh_per_day: number;
+}
+
+export interface Comparison {
+  readonly rows: readonly ComparisonRow[];
+  /** The build-up that meets every limit at the least heat loss (null when none meets them all). */
+  readonly recommended: string | null;
+  readonly rule: string;
+}
+
+export function comparisonRow(summary: Summary): ComparisonRow {
+  const stresses = summary.layers.map((l) => l.stress_indicator_mpa).filter((v): v is number => v !== null);
+  return {
+    scenario: summary.scenario.name,
+    build_up: summary.layers.map((l) => `${l.thickness_mm} mm ${l.material}`).join(' | '),
+    all_limits_pass: summary.all_limits_pass,
+    failed_limits: summary.verdicts.filter((v) => v.status === 'fail').map((v) => v.limit),
+    peak_shell_c: summary.peak_shell_c,
+    peak_lining_c: summary.peak_lining_c,
+    lowest_acid_dew_margin_k: summary.lowest_acid_dew_margin_k,
+    lowest_water_dew_margin_k: summary.lowest_water_dew_margin_k,
+    max_stress_indicator_mpa: stresses.length ? Math.max(...stresses) : null,
+    heat_loss_kwh_per_day: summary.heat_loss_kwh_per_day,
+  };
+}
+
+/** Rows for every summary and the recommendation: every limit met, then the least heat loss per day. */
+export function compareBuildUps(summaries: readonly Summary[]): Comparison {
+  const rows = summaries.map(comparisonRow);
+  const passing = rows.filter((r) => r.all_limits_pass);
+  const best = passing.reduce<ComparisonRow | null>((a, b) => (a === null || b.heat_loss_kwh_per_day < a.heat_loss_kwh_per_day ? b : a), null);
+  return { rows, recommended: best ? best.scenario : null, rule: 'meets every limit that is set, then the least heat loss per day' };
+}
+
+/** comparison.csv text. */
+export function comparisonCsv(c: Comparison): string {
+  const head = 'scenario,build_up,all_limits_pass,failed_limits,peak_shell_c,peak_lining_c,lowest_acid_dew_margin_k,lowest_water_dew_margin_k,max_stress_indicator_mpa,heat_loss_kwh_per_day,recommended\n';
+  const cell = (v: unknown) => (v === null || v === undefined ? '' : /[",\n]/.test(String(v)) ? `"${String(v).replace(/"/g, '""')}"` : String(v));
+  return (
+    head +
+    c.rows
+      .map((r) =>
+        [r.scenario, r.build_up, r.all_limits_pass, r.failed_limits.join(' '), r.peak_shell_c, r.peak_lining_c, r.lowest_acid_dew_margin_k, r.lowest_water_dew_margin_k, r.max_stress_indicator_mpa, r.heat_loss_kwh_per_day, r.scenario === c.recommended]
+          .map(cell)
+          .join(','),
+      )
+      .join('\n') +
+    '\n'
+  );
+}
