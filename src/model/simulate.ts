@@ -149,10 +149,8 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   // ---- recording ----
   const rec = new Recorder(prep);
   const diag = makeSegmentDiagnostics(S);
-  const dydt = new Float64Array(system.size);
-  const auxRate = new Float64Array(AUX_SIZE);
   const record = (t: number, state: Float64Array, dayNumber: number) => {
-    system.evaluate(t, state, dydt, auxRate, diag);
+    system.diagnostics(t, state, diag);
     // a repeated first day is reported on that day's clock
     const tShown = ctx.repeatFirstDay ? t - dayNumber * SECONDS_PER_DAY : t;
     rec.push(tShown, clock.isoLocal(tShown), ctx.repeatFirstDay ? 0 : clock.dayIndex(t - t0), state, diag, system.driversAt(t));

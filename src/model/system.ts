@@ -82,8 +82,13 @@ export class StackWallSystem implements OdeSystem {
   private readonly drivers: Drivers = emptyDrivers();
   private readonly conductance: Float64Array;
   private readonly capacity: Float64Array;
-  private readonly innerSink: Float64Array; // ∂q'_in/∂T_0 per segment (≤ 0)
+  private readonly innerSink: Float64Array; // −∂q'_in/∂T_0 per segment (≥ 0)
   private readonly outerSink: Float64Array; // ∂q'_out/∂T_N per segment (≥ 0, heat leaving)
+  /** Per segment, W per metre of height: from the gas into the wall, convection and radiation out, sun in. */
+  private readonly flueToWall: Float64Array;
+  private readonly convectionOut: Float64Array;
+  private readonly radiationOut: Float64Array;
+  private readonly sunIn: Float64Array;
   /** When set, the rhs is the mean over these instants (steady state at daily-mean conditions). */
   meanOver: readonly number[] | null = null;
   private readonly scratch: Float64Array;
@@ -106,6 +111,10 @@ export class StackWallSystem implements OdeSystem {
     this.capacity = new Float64Array(this.n);
     this.innerSink = new Float64Array(geometry.segments);
     this.outerSink = new Float64Array(geometry.segments);
+    this.flueToWall = new Float64Array(geometry.segments);
+    this.convectionOut = new Float64Array(geometry.segments);
+    this.radiationOut = new Float64Array(geometry.segments);
+    this.sunIn = new Float64Array(geometry.segments);
     this.scratch = new Float64Array(this.size);
     this.scratchAux = new Float64Array(AUX_SIZE);
   }
@@ -148,25 +157,11 @@ export class StackWallSystem implements OdeSystem {
 
   /** dT/dt, quadrature rates and (optionally) per-segment diagnostics at (t, y). */
   evaluate(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array, diag: SegmentDiagnostics | null): void {
-    const d = this.driversAt(t);
-    const { mesh, geometry, inputs } = this;
+    const { mesh, geometry } = this;
     const n = this.n;
-    const dz = geometry.segmentLength;
-    const di = geometry.innerDiameter;
-    const dOut = geometry.outerDiameter;
-    const flue = inputs.flue;
-    const outside = inputs.outside;
-    const eps = inputs.surface.emissivity;
-    const massFlow = d.massFlow;
-    let gasIn = d.inletTemperatureK;
-    let qGas = 0;
-    let qConv = 0;
-    let qRad = 0;
-    let qSun = 0;
-
+    this.boundaries(t, y, diag);
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;
-      // --- conduction links and capacities ---
       this.fillConductances(y, o);
       for (let i = 0; i < n; i++) {
         this.capacity[i] = nodeCapacity(mesh, i, y[o + i]!);
@@ -177,7 +172,55 @@ export class StackWallSystem implements OdeSystem {
         dydt[o + i] -= q;
         dydt[o + i + 1] += q;
       }
+      dydt[o] += this.flueToWall[s]!;
+      dydt[o + n - 1] += this.sunIn[s]! - this.convectionOut[s]! - this.radiationOut[s]!;
+      for (let i = 0; i < n; i++) dydt[o + i] /= this.capacity[i]!;
+    }
+    const dz = geometry.segmentLength;
+    let qGas = 0;
+    let qConv = 0;
+    let qRad = 0;
+    let qSun = 0;
+    for (let s = 0; s < geometry.segments; s++) {
+      qGas += this.flueToWall[s]! * dz;
+      qConv += this.convectionOut[s]! * dz;
+      qRad += this.radiationOut[s]! * dz;
+      qSun += this.sunIn[s]! * dz;
+    }
+    this.lastT = t;
+    this.lastSum = fingerprint(y);
+    aux[AUX_GAS_TO_WALL] = qGas;
+    aux[AUX_CONVECTION] = qConv;
+    aux[AUX_RADIATION] = qRad;
+    aux[AUX_SUN] = qSun;
+  }
 
+  /** The per-segment boundary quantities at (t, y) for reports, without the wall's conduction. */
+  diagnostics(t: number, y: Float64Array, diag: SegmentDiagnostics): void {
+    this.boundaries(t, y, diag);
+  }
+
+  /**
+   * Flue side and outside of every segment at (t, y): heat from the gas into the inner surface
+   * (marching the gas up), and convection, radiation and absorbed sun at the outer surface, each
+   * per metre of height, with their derivatives for the Jacobian.
+   */
+  private boundaries(t: number, y: Float64Array, diag: SegmentDiagnostics | null): void {
+    const d = this.driversAt(t);
+    const { geometry, inputs } = this;
+    const n = this.n;
+    const dz = geometry.segmentLength;
+    const di = geometry.innerDiameter;
+    const dOut = geometry.outerDiameter;
+    const perimeter = Math.PI * dOut;
+    const flue = inputs.flue;
+    const outside = inputs.outside;
+    const eps = inputs.surface.emissivity;
+    const massFlow = d.massFlow;
+    let gasIn = d.inletTemperatureK;
+
+    for (let s = 0; s < geometry.segments; s++) {
+      const o = s * n;
       // --- flue side ---
       const tw = y[o]!;
       const props = this.gas(gasIn);
@@ -197,7 +240,7 @@ export class StackWallSystem implements OdeSystem {
         qIn = hIn * Math.PI * di * (gasIn - tw);
         this.innerSink[s] = hIn * Math.PI * di;
       }
-      dydt[o] += qIn;
+      this.flueToWall[s] = qIn;
 
       // --- outside ---
       const ts = y[o + n - 1]!;
@@ -216,10 +259,9 @@ export class StackWallSystem implements OdeSystem {
         reOut = film.re;
         raOut = film.ra;
       }
-      const qc = hOut * Math.PI * dOut * (ts - d.airTemperatureK);
+      const qc = hOut * perimeter * (ts - d.airTemperatureK);
       let qr = 0;
       let hr = 0;
-      const perimeter = Math.PI * dOut;
       if (outside.radiation.kind === 'sky-ground') {
         qr = radiationToSkyAndGround(ts, eps, d.skyTemperatureK, d.groundTemperatureK) * perimeter;
         hr = radiationCoefficientToSkyAndGround(ts, eps) * perimeter;
@@ -228,16 +270,11 @@ export class StackWallSystem implements OdeSystem {
         qr = radiationToSkyAndGround(ts, eps, d.skyTemperatureK, d.skyTemperatureK) * perimeter;
         hr = radiationCoefficientToSkyAndGround(ts, eps) * perimeter;
       }
-      const qs = d.sunPerMetre;
-      dydt[o + n - 1] += qs - qc - qr;
-      this.outerSink[s] = hOut * Math.PI * dOut + hr;
+      this.convectionOut[s] = qc;
+      this.radiationOut[s] = qr;
+      this.sunIn[s] = d.sunPerMetre;
+      this.outerSink[s] = hOut * perimeter + hr;
 
-      for (let i = 0; i < n; i++) dydt[o + i] /= this.capacity[i]!;
-
-      qGas += qIn * dz;
-      qConv += qc * dz;
-      qRad += qr * dz;
-      qSun += qs * dz;
       if (diag) {
         diag.gasInK[s] = gasIn;
         diag.gasOutK[s] = gasOut;
@@ -247,7 +284,7 @@ export class StackWallSystem implements OdeSystem {
         diag.outsideFilm[s] = hOut;
         diag.convectionPerMetre[s] = qc;
         diag.radiationPerMetre[s] = qr;
-        diag.sunPerMetre[s] = qs;
+        diag.sunPerMetre[s] = d.sunPerMetre;
         diag.reynoldsInside[s] = reynolds;
         diag.prandtlInside[s] = props.prandtl;
         diag.reynoldsOutside[s] = reOut;
@@ -256,12 +293,6 @@ export class StackWallSystem implements OdeSystem {
       }
       gasIn = gasOut;
     }
-    this.lastT = t;
-    this.lastSum = fingerprint(y);
-    aux[AUX_GAS_TO_WALL] = qGas;
-    aux[AUX_CONVECTION] = qConv;
-    aux[AUX_RADIATION] = qRad;
-    aux[AUX_SUN] = qSun;
   }
 
   /**
