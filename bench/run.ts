@@ -15,10 +15,12 @@ import { simulate } from '../src/model/simulate.ts';
 import type { ModelInputs } from '../src/model/inputs.ts';
 import type { RunResult } from '../src/model/timeseries.ts';
 
+/** Runs before timing: V8 needs about this many one-day runs before its optimised code settles. */
+const WARM_UP_RUNS = 10;
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
 function timeRuns(inputs: ModelInputs, repeats: number): { ms: number; bestMs: number; initialMs: number; result: RunResult } {
-  for (let i = 0; i < 4; i++) simulate(inputs); // warm-up: let the JIT compile the hot paths first
+  for (let i = 0; i < WARM_UP_RUNS; i++) simulate(inputs); // warm-up: let the JIT compile the hot paths first
   const times: number[] = [];
   const initial: number[] = [];
   let result!: RunResult;
@@ -47,7 +49,7 @@ console.log('');
 const day = timeRuns(oneDay, 15);
 const r = day.result;
 console.log(`1. one day, ${r.series.segments} segments × ${r.series.nodes} nodes = ${r.series.segments * r.series.nodes} unknowns, output every ${oneDay.run.outputInterval / 60} min`);
-console.log(`   implicit TR-BDF2: ${(day.ms - day.initialMs).toFixed(1)} ms for the day's integration (median of 15 after 4 warm-up runs; best ${day.bestMs.toFixed(1)} ms), ${r.integrator.steps} steps, ${r.integrator.rhsEvaluations} rhs evaluations`);
+console.log(`   implicit TR-BDF2: ${(day.ms - day.initialMs).toFixed(1)} ms for the day's integration (median of 15 after ${WARM_UP_RUNS} warm-up runs; best ${day.bestMs.toFixed(1)} ms), ${r.integrator.steps} steps, ${r.integrator.rhsEvaluations} rhs evaluations`);
 console.log(`   plus ${day.initialMs.toFixed(1)} ms to find the steady initial state: ${day.ms.toFixed(1)} ms per run in all`);
 const week = timeRuns({ ...oneDay, run: { ...oneDay.run, length: { kind: 'days', days: 7 } } }, 3);
 console.log(`   a 7-day run: ${(week.ms / 7).toFixed(1)} ms per simulated day in all`);
@@ -86,15 +88,22 @@ console.log('');
 const noOutside: ModelInputs = { ...oneDay, outside: { filmCoefficient: 10, radiation: { kind: 'none' }, sun: false } };
 const noInside: ModelInputs = { ...oneDay, flue: { ...oneDay.flue, filmCoefficient: 15 } };
 const neither: ModelInputs = { ...noOutside, flue: noInside.flue };
-const tOutside = timeRuns(noOutside, 5);
-const tInside = timeRuns(noInside, 5);
-const tNeither = timeRuns(neither, 5);
-const perEval = (x: { ms: number; result: RunResult }) => (1000 * x.ms) / x.result.integrator.rhsEvaluations;
-console.log('3. where the time goes (µs per rhs evaluation of the whole stack)');
-console.log(`   full physics                          ${perEval(day).toFixed(1)} µs`);
-console.log(`   outside correlations, sky, sun off    ${perEval(tOutside).toFixed(1)} µs  → outside physics ≈ ${(perEval(day) - perEval(tOutside)).toFixed(1)} µs`);
-console.log(`   inside correlation off                ${perEval(tInside).toFixed(1)} µs  → inside physics ≈ ${(perEval(day) - perEval(tInside)).toFixed(1)} µs`);
-console.log(`   both off (conduction + gas march + solver) ${perEval(tNeither).toFixed(1)} µs`);
+// interleaved rounds, so that every variant meets the same JIT state and machine load
+const variants = { full: oneDay, noOutside, noInside, neither } as const;
+const perRhs: Record<keyof typeof variants, number[]> = { full: [], noOutside: [], noInside: [], neither: [] };
+for (const v of Object.values(variants)) for (let i = 0; i < WARM_UP_RUNS; i++) simulate(v);
+for (let round = 0; round < 7; round++) {
+  for (const [name, v] of Object.entries(variants) as [keyof typeof variants, ModelInputs][]) {
+    const res = simulate(v);
+    perRhs[name].push((1000 * (res.integrator.computeMs - res.integrator.initialStateMs)) / res.integrator.rhsEvaluations);
+  }
+}
+const us = (name: keyof typeof variants) => median(perRhs[name]);
+console.log('3. where the time goes (µs per rhs evaluation of the whole stack, median of 7 interleaved rounds)');
+console.log(`   full physics                               ${us('full').toFixed(1)} µs`);
+console.log(`   outside correlations, sky, sun off         ${us('noOutside').toFixed(1)} µs  → outside physics ≈ ${(us('full') - us('noOutside')).toFixed(1)} µs`);
+console.log(`   inside correlation off                     ${us('noInside').toFixed(1)} µs  → inside physics ≈ ${(us('full') - us('noInside')).toFixed(1)} µs`);
+console.log(`   both off (conduction + gas march + solver) ${us('neither').toFixed(1)} µs`);
 console.log('');
 
 // ---- 4. charts ----
