@@ -201,3 +201,25 @@ describe('compare', () => {
     await expectBadInput(['compare', a, bad], /surface\.emissivity/);
   });
 });
+
+describe('weather files through the command', () => {
+  it('a weather file with a repeated time is bad input naming the line', async () => {
+    const csv = join(dir, 'dup.csv');
+    writeFileSync(csv, 'time,air_temperature_c,wind_speed_m_s\n2026-07-15T00:00,15,3\n2026-07-15T01:00,14,3\n2026-07-15T01:00,14,3\n2026-07-16T01:00,14,3\n');
+    const file = scenarioFile('wx', (s) => {
+      delete s.weather.design_day;
+      s.weather.file = csv;
+    });
+    await expectBadInput(['run', file], /weather\.file: .*line 4/);
+  });
+
+  it('a weather file that does not cover the run is bad input', async () => {
+    const csv = join(dir, 'short.csv');
+    writeFileSync(csv, 'time,air_temperature_c,wind_speed_m_s\n2026-07-15T00:00,15,3\n2026-07-15T06:00,14,3\n');
+    const file = scenarioFile('wx2', (s) => {
+      delete s.weather.design_day;
+      s.weather.file = csv;
+    });
+    await expectBadInput(['run', file], /weather\.file: /);
+  });
+});
