@@ -144,6 +144,7 @@ export interface Summary {
 export const CAUTIONS: readonly string[] = [
   'These results inform engineering judgement; they do not certify a design or an installation.',
   'Hot surfaces burn: touch limits such as those in ISO 13732-1 and ASTM C1055 are guidance; guard or insulate surfaces people can reach.',
+  'The sun is averaged round the circumference: the sun-facing side of the shell runs hotter, and the shaded side of the lining colder, than these figures.',
   'Flue gas below its acid or water dew point condenses and corrodes linings and shells; verify with measurements where margins are small.',
   'Structural adequacy (wind, seismic, thermal stress, foundations) is not checked; the stress figure is an indicator only.',
   'Follow local codes and standards, and have a licensed engineer review any design or operating decision based on these figures.',
