@@ -49,7 +49,7 @@ function parseChartSize(text: string): { width: number; height: number } {
 
 function parseHeights(text: string): number[] {
   const values = text.split(',').map((v) => Number(v.trim()));
-  if (values.length === 0 || values.some((v) => !Number.isFinite(v) || v < 0))
+  if (values.some((v) => !Number.isFinite(v) || v < 0))
     throw new BadInput(`--chart-heights: found "${text}"; expected heights in m separated by commas, e.g. 5,20,40`);
   return values;
 }

@@ -36,10 +36,6 @@ export interface DriverContext {
   readonly weather: WeatherSource;
   readonly schedule: FiringSchedule;
   readonly outerDiameter: number;
-  /** Warm-up: run time of firing start; before it the flue is cold and idle. */
-  readonly firingStartT?: number;
-  /** Mass flow while idle, kg/s. */
-  readonly idleMassFlow: number;
   /** Repeat the first day's drivers every day (periodic studies): drivers at t are those at t mod 1 day. */
   readonly repeatFirstDay: boolean;
 }
@@ -92,16 +88,11 @@ export function evaluateDrivers(ctx: DriverContext, tRun: number, out: Drivers):
       }).total
     : 0;
 
-  if (ctx.firingStartT !== undefined && t < ctx.firingStartT) {
-    out.inletTemperatureK = air.airTemperatureK;
-    out.massFlow = ctx.idleMassFlow;
-    out.firing = false;
-  } else {
-    const f = ctx.schedule.at(clock.dayIndex(t), clock.localSecondsOfDay(t));
-    out.inletTemperatureK = f.inletTemperatureK;
-    out.massFlow = f.massFlow;
-    out.firing = f.firing;
-  }
+  // (a warm-up run starts at firing start, so the schedule applies from its first instant)
+  const f = ctx.schedule.at(clock.dayIndex(t), clock.localSecondsOfDay(t));
+  out.inletTemperatureK = f.inletTemperatureK;
+  out.massFlow = f.massFlow;
+  out.firing = f.firing;
   return out;
 }
 

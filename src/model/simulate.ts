@@ -9,7 +9,7 @@ import { buildWallMesh, nodeEnthalpyChange, type WallMesh } from '../wall/mesh.t
 import { StackWallSystem, makeSegmentDiagnostics, AUX_SIZE, AUX_GAS_TO_WALL, AUX_CONVECTION, AUX_RADIATION, AUX_SUN, type StackGeometry } from './system.ts';
 import type { DriverContext } from './drivers.ts';
 import { INTEGRATORS } from '../solver/index.ts';
-import { steadyState } from './steady.ts';
+import { steadyState, averagedOverInstants } from './steady.ts';
 import { IntegrationError } from '../solver/types.ts';
 import { makeDesignDay } from '../weather/designDay.ts';
 import { parseWeatherCsv } from '../weather/csvFile.ts';
@@ -74,7 +74,6 @@ export function prepareModel(inputs: ModelInputs): Prepared {
     weather,
     schedule,
     outerDiameter: geometry.outerDiameter,
-    idleMassFlow: schedule.minimumMassFlow,
     repeatFirstDay: inputs.run.length.kind === 'until-periodic',
   };
   const system = new StackWallSystem(inputs, mesh, geometry, ctx, gas);
@@ -150,7 +149,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   const rec = new Recorder(prep);
   const diag = makeSegmentDiagnostics(S);
   const record = (t: number, state: Float64Array, dayNumber: number) => {
-    system.diagnostics(t, state, diag);
+    system.boundaries(t, state, diag);
     // a repeated first day is reported on that day's clock
     const tShown = ctx.repeatFirstDay ? t - dayNumber * SECONDS_PER_DAY : t;
     rec.push(tShown, clock.isoLocal(tShown), ctx.repeatFirstDay ? 0 : clock.dayIndex(t - t0), state, diag, system.driversAt(t));
@@ -263,14 +262,12 @@ function initialState(prep: Prepared, t0: number): Float64Array {
   const y = new Float64Array(system.size).fill(d.airTemperatureK);
   if (inputs.run.initial === 'cold') return y;
   y.fill(0.5 * (d.airTemperatureK + d.inletTemperatureK));
-  system.meanOver = inputs.run.initial === 'steady-at-start' ? [t0] : Array.from({ length: 24 }, (_, k) => t0 + (k + 0.5) * 3600);
+  const instants = inputs.run.initial === 'steady-at-start' ? [t0] : Array.from({ length: 24 }, (_, k) => t0 + (k + 0.5) * 3600);
   try {
-    return steadyState(system, y);
+    return steadyState(averagedOverInstants(system, instants), y);
   } catch (e) {
     if (e instanceof IntegrationError) throw new SimulationError(`could not find the initial steady state: ${e.message}`);
     throw e;
-  } finally {
-    system.meanOver = null;
   }
 }
 

@@ -65,3 +65,29 @@ export function steadyState(system: OdeSystem, guess: Float64Array, options: Ste
   const res = INTEGRATORS.implicit(system, y, 0, [1e5, 1e6, 1e7, 1e8, 1e9], { rtol: 1e-7, atol: 1e-5 });
   return Float64Array.from(res.y);
 }
+
+/**
+ * The system with its drivers frozen: dy/dt at any t is the mean of dy/dt at `instants` (one
+ * instant: the conditions of that instant; 24 hourly instants: the day's mean conditions). The
+ * Jacobian is that of the middle instant. Its steady state is what `steadyState` finds.
+ */
+export function averagedOverInstants(system: OdeSystem, instants: readonly number[]): OdeSystem {
+  const one = new Float64Array(system.size);
+  const oneAux = new Float64Array(system.auxSize);
+  const m = instants.length;
+  const middle = instants[Math.floor(m / 2)]!;
+  return {
+    size: system.size,
+    auxSize: system.auxSize,
+    rhs(_t, y, dydt, aux) {
+      dydt.fill(0);
+      aux.fill(0);
+      for (const tk of instants) {
+        system.rhs(tk, y, one, oneAux);
+        for (let i = 0; i < one.length; i++) dydt[i] += one[i]! / m;
+        for (let i = 0; i < oneAux.length; i++) aux[i] += oneAux[i]! / m;
+      }
+    },
+    jacobian: system.jacobian ? (_t, y, lower, diag, upper) => system.jacobian!(middle, y, lower, diag, upper) : undefined,
+  };
+}

@@ -89,14 +89,10 @@ export class StackWallSystem implements OdeSystem {
   private readonly convectionOut: Float64Array;
   private readonly radiationOut: Float64Array;
   private readonly sunIn: Float64Array;
-  /** When set, the rhs is the mean over these instants (steady state at daily-mean conditions). */
-  meanOver: readonly number[] | null = null;
-  private readonly scratch: Float64Array;
-  private readonly scratchAux: Float64Array;
   private readonly film = airPropertiesAt(300);
-  /** Fingerprint of the last state passed to `evaluate` (its sinks are reused by `jacobian`). */
-  private lastT = Number.NaN;
-  private lastSum = Number.NaN;
+  /** Instant and state fingerprint at which `innerSink`/`outerSink` were last computed (reused by `jacobian`). */
+  private sinksT = Number.NaN;
+  private sinksFingerprint = Number.NaN;
 
   constructor(
     readonly inputs: ModelInputs,
@@ -115,8 +111,6 @@ export class StackWallSystem implements OdeSystem {
     this.convectionOut = new Float64Array(geometry.segments);
     this.radiationOut = new Float64Array(geometry.segments);
     this.sunIn = new Float64Array(geometry.segments);
-    this.scratch = new Float64Array(this.size);
-    this.scratchAux = new Float64Array(AUX_SIZE);
   }
 
   /** Conductances per metre of height of the links of the segment whose nodes start at offset o. */
@@ -140,26 +134,11 @@ export class StackWallSystem implements OdeSystem {
     return this.drivers;
   }
 
+  /** dT/dt and the quadrature rates (whole-stack heat flows) at (t, y). */
   rhs(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array): void {
-    if (!this.meanOver) {
-      this.evaluate(t, y, dydt, aux, null);
-      return;
-    }
-    dydt.fill(0);
-    aux.fill(0);
-    const m = this.meanOver.length;
-    for (const tk of this.meanOver) {
-      this.evaluate(tk, y, this.scratch, this.scratchAux, null);
-      for (let i = 0; i < this.size; i++) dydt[i] += this.scratch[i]! / m;
-      for (let i = 0; i < AUX_SIZE; i++) aux[i] += this.scratchAux[i]! / m;
-    }
-  }
-
-  /** dT/dt, quadrature rates and (optionally) per-segment diagnostics at (t, y). */
-  evaluate(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array, diag: SegmentDiagnostics | null): void {
     const { mesh, geometry } = this;
     const n = this.n;
-    this.boundaries(t, y, diag);
+    this.boundaries(t, y, null);
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;
       this.fillConductances(y, o);
@@ -187,25 +166,19 @@ export class StackWallSystem implements OdeSystem {
       qRad += this.radiationOut[s]! * dz;
       qSun += this.sunIn[s]! * dz;
     }
-    this.lastT = t;
-    this.lastSum = fingerprint(y);
     aux[AUX_GAS_TO_WALL] = qGas;
     aux[AUX_CONVECTION] = qConv;
     aux[AUX_RADIATION] = qRad;
     aux[AUX_SUN] = qSun;
   }
 
-  /** The per-segment boundary quantities at (t, y) for reports, without the wall's conduction. */
-  diagnostics(t: number, y: Float64Array, diag: SegmentDiagnostics): void {
-    this.boundaries(t, y, diag);
-  }
-
   /**
    * Flue side and outside of every segment at (t, y): heat from the gas into the inner surface
    * (marching the gas up), and convection, radiation and absorbed sun at the outer surface, each
-   * per metre of height, with their derivatives for the Jacobian.
+   * per metre of height, with their derivatives for the Jacobian. With `diag`, also the
+   * per-segment quantities reports need (no conduction is evaluated).
    */
-  private boundaries(t: number, y: Float64Array, diag: SegmentDiagnostics | null): void {
+  boundaries(t: number, y: Float64Array, diag: SegmentDiagnostics | null): void {
     const d = this.driversAt(t);
     const { geometry, inputs } = this;
     const n = this.n;
@@ -293,6 +266,8 @@ export class StackWallSystem implements OdeSystem {
       }
       gasIn = gasOut;
     }
+    this.sinksT = t;
+    this.sinksFingerprint = fingerprint(y);
   }
 
   /**
@@ -301,18 +276,9 @@ export class StackWallSystem implements OdeSystem {
    * temperature on the walls below is left out (it only slows Newton a little).
    */
   jacobian(t: number, y: Float64Array, lower: Float64Array, diag: Float64Array, upper: Float64Array): void {
-    // Refresh conductances, capacities and sinks at this state (evaluate fills them per segment,
-    // so run it segment-consistently by evaluating once and rebuilding per segment below).
+    // the surface sinks at this state (already there when the last rhs call was at this state)
     const n = this.n;
-    const tmp = this.scratch;
-    const aux = this.scratchAux;
-    const saved = this.meanOver;
-    const tEval = saved ? saved[Math.floor(saved.length / 2)]! : t;
-    if (!(this.lastT === tEval && this.lastSum === fingerprint(y))) {
-      this.meanOver = null;
-      this.evaluate(tEval, y, tmp, aux, null); // fills innerSink / outerSink
-      this.meanOver = saved;
-    }
+    if (!(this.sinksT === t && this.sinksFingerprint === fingerprint(y))) this.boundaries(t, y, null);
     const { mesh, geometry } = this;
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;

@@ -9,14 +9,14 @@ import { scenarioSchema, type Scenario, type ScenarioMaterial } from './schema.t
 import { ScenarioError, formatIssues } from './errors.ts';
 import type { ModelInputs, LayerInput, WeatherInput, FiringPointInput, GasCompositionInput } from '../model/inputs.ts';
 import type { Material, PropertyTable } from '../materials/types.ts';
-import { findMaterial, suggestMaterial } from '../materials/index.ts';
+import { findMaterial } from '../materials/index.ts';
 import { validateTable } from '../properties/table.ts';
 import { airPressureAtElevation } from '../properties/air.ts';
 import { KELVIN_OFFSET, SECONDS_PER_DAY, MOLAR_MASS_AIR } from '../properties/constants.ts';
-import { makeSiteClock, isValidTimeZone } from '../sun/clock.ts';
+import { makeSiteClock } from '../sun/clock.ts';
 import { TERRAIN_EXPONENTS } from '../weather/wind.ts';
 import { parseWeatherCsv, WeatherFileError } from '../weather/csvFile.ts';
-import { FUELS, fuelByName, validateUltimateAnalysis } from '../flue/fuels.ts';
+import { fuelByName, validateUltimateAnalysis } from '../flue/fuels.ts';
 import { flueGasFromFuel, flueGasFromVolumeFractions, molarMass } from '../flue/combustion.ts';
 import { validateFiringSchedule, massFlowFromNormalVolumeFlow, type FiringScheduleSpec } from '../flue/schedule.ts';
 
@@ -67,33 +67,21 @@ export function validateScenario(raw: unknown, options: { baseDir?: string; file
 const c = (k: number) => `${(k - KELVIN_OFFSET).toFixed(1)} °C`;
 
 function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelInputs | null {
-  // ---- site and clock ----
+  // ---- site and clock (the schema has checked the time zone) ----
   let clock: ReturnType<typeof makeSiteClock> | null = null;
-  if (!isValidTimeZone(s.site.time_zone)) problems.push(`site.time_zone: found "${s.site.time_zone}"; expected an IANA time zone such as "Europe/Oslo" or "America/Chicago"`);
-  else {
-    try {
-      clock = makeSiteClock(s.site.time_zone, s.site.first_day);
-    } catch {
-      problems.push(`site.first_day: found "${s.site.first_day}"; expected a calendar date "YYYY-MM-DD"`);
-    }
+  try {
+    clock = makeSiteClock(s.site.time_zone, s.site.first_day);
+  } catch {
+    problems.push(`site.first_day: found "${s.site.first_day}"; expected a calendar date "YYYY-MM-DD"`);
   }
   const windExponent = typeof s.site.terrain === 'number' ? s.site.terrain : TERRAIN_EXPONENTS[s.site.terrain];
 
   // ---- layers ----
   const layers: LayerInput[] = [];
   s.stack.layers.forEach((l, j) => {
-    let material: Material | undefined;
-    if (typeof l.material === 'string') {
-      material = findMaterial(l.material);
-      if (!material) {
-        const hint = suggestMaterial(l.material);
-        problems.push(`stack.layers[${j}].material: found "${l.material}"; expected a material from the library${hint ? ` (did you mean "${hint}"?)` : ''}; \`stackday materials\` lists them`);
-        return;
-      }
-    } else {
-      material = inlineMaterial(l.material, `stack.layers[${j}].material`, problems);
-      if (!material) return;
-    }
+    // a library name has been checked by the schema
+    const material = typeof l.material === 'string' ? findMaterial(l.material)! : inlineMaterial(l.material, `stack.layers[${j}].material`, problems);
+    if (!material) return;
     if (material.kind === 'gap' && (j === 0 || j === s.stack.layers.length - 1))
       problems.push(`stack.layers[${j}].material: found an air gap as the ${j === 0 ? 'innermost' : 'outermost'} layer; expected a gap only between two solid layers`);
     if (l.contact_resistance > 0 && j === s.stack.layers.length - 1)
@@ -148,15 +136,14 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   }
 
   // ---- flue gas ----
+  // a library fuel name has been checked by the schema
   let composition: GasCompositionInput | null = null;
   const g = s.flue.gas;
-  if (g.fuel !== undefined) {
-    if (!Object.hasOwn(FUELS, g.fuel)) problems.push(`flue.gas.fuel: found "${g.fuel}"; expected one of ${Object.keys(FUELS).join(', ')}`);
-    else composition = flueGasFromFuel(fuelByName(g.fuel), g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
-  } else if (g.fuel_analysis) {
-    const issues = validateUltimateAnalysis(g.fuel_analysis);
-    if (issues.length > 0) problems.push(...issues.map((i) => `flue.gas.fuel_analysis: ${i}`));
-    else composition = flueGasFromFuel(g.fuel_analysis, g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
+  const fuelIssues = g.fuel_analysis ? validateUltimateAnalysis(g.fuel_analysis) : [];
+  problems.push(...fuelIssues.map((i) => `flue.gas.fuel_analysis: ${i}`));
+  const fuel = g.fuel !== undefined ? fuelByName(g.fuel) : fuelIssues.length === 0 ? g.fuel_analysis : undefined;
+  if (fuel) {
+    composition = flueGasFromFuel(fuel, g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
   } else if (g.composition) {
     const k = g.composition;
     const sum = k.N2 + k.O2 + k.CO2 + k.H2O;
@@ -185,7 +172,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
     });
   }
   if (largestFlow === 0 && !(s.flue.off_mass_flow && s.flue.off_mass_flow > 0))
-    problems.push('flue.schedule: found every mass_flow 0; expected some flow, or flue.off_mass_flow for the natural draft with the burner off');
+    problems.push('flue.schedule: found every flow 0; expected some flow, or flue.off_mass_flow for the natural draft with the burner off');
   if (problems.length === 0) for (const msg of validateFiringSchedule({ ...schedule, minimumMassFlow: s.flue.off_mass_flow } as FiringScheduleSpec)) problems.push(`flue.schedule: ${msg}`);
 
   // ---- run ----

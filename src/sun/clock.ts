@@ -25,8 +25,6 @@ export interface SiteClock {
   dayIndex(t: number): number;
   /** ISO 8601 local time with offset at run time `t`, e.g. `2026-07-14T13:00:00+02:00`. */
   isoLocal(t: number): string;
-  /** Calendar month (1–12) of the local date at run time `t`. */
-  month(t: number): number;
   /** Run time (s) of local clock time `secondsOfDay` on the local date `dayIndex` days after the start. */
   runTimeOfLocal(dayIndex: number, secondsOfDay: number): number;
 }
@@ -43,7 +41,6 @@ export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
   const startUtcMs = start.getTime();
   if (!Number.isFinite(startUtcMs) || start.getDate() !== d) throw new RangeError(`start date "${startDate}" is not a calendar date`);
 
-  const local = (t: number) => new TZDate(startUtcMs + t * 1000, timeZone);
   // UTC offsets change only at whole quarter hours of UTC in every zone of the tz database, so
   // the offset is cached per 15-minute block of UTC (the time-zone lookup is costly).
   const offsetCache = new Map<number, number>();
@@ -78,7 +75,6 @@ export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
       const p2 = (n: number) => String(Math.trunc(Math.abs(n))).padStart(2, '0');
       return `${d.getUTCFullYear()}-${p2(d.getUTCMonth() + 1)}-${p2(d.getUTCDate())}T${p2(d.getUTCHours())}:${p2(d.getUTCMinutes())}:${p2(d.getUTCSeconds())}${sign}${p2(off / 60)}:${p2(off % 60)}`;
     },
-    month: (t) => local(t).getMonth() + 1,
     runTimeOfLocal(dayIndex, secondsOfDay) {
       const h = Math.floor(secondsOfDay / 3600);
       const rest = secondsOfDay - h * 3600;

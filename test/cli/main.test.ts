@@ -203,23 +203,23 @@ describe('compare', () => {
 });
 
 describe('weather files through the command', () => {
-  it('a weather file with a repeated time is bad input naming the line', async () => {
-    const csv = join(dir, 'dup.csv');
-    writeFileSync(csv, 'time,air_temperature_c,wind_speed_m_s\n2026-07-15T00:00,15,3\n2026-07-15T01:00,14,3\n2026-07-15T01:00,14,3\n2026-07-16T01:00,14,3\n');
-    const file = scenarioFile('wx', (s) => {
+  /** The demo scenario reading its weather from a CSV file with the given text. */
+  function withWeatherFile(name: string, csvText: string): string {
+    const csv = join(dir, `${name}.csv`);
+    writeFileSync(csv, csvText);
+    return scenarioFile(name, (s) => {
       delete s.weather.design_day;
       s.weather.file = csv;
     });
+  }
+
+  it('a weather file with a repeated time is bad input naming the line', async () => {
+    const file = withWeatherFile('dup', 'time,air_temperature_c,wind_speed_m_s\n2026-07-15T00:00,15,3\n2026-07-15T01:00,14,3\n2026-07-15T01:00,14,3\n2026-07-16T01:00,14,3\n');
     await expectBadInput(['run', file], /weather\.file: .*line 4/);
   });
 
   it('a weather file that does not cover the run is bad input', async () => {
-    const csv = join(dir, 'short.csv');
-    writeFileSync(csv, 'time,air_temperature_c,wind_speed_m_s\n2026-07-15T00:00,15,3\n2026-07-15T06:00,14,3\n');
-    const file = scenarioFile('wx2', (s) => {
-      delete s.weather.design_day;
-      s.weather.file = csv;
-    });
+    const file = withWeatherFile('short', 'time,air_temperature_c,wind_speed_m_s\n2026-07-15T00:00,15,3\n2026-07-15T06:00,14,3\n');
     await expectBadInput(['run', file], /weather\.file: /);
   });
 });

@@ -61,3 +61,20 @@ export function baseInputs(over: Partial<ModelInputs> & { layers: readonly Layer
   };
   return { ...base, ...over };
 }
+
+/**
+ * Inputs with fixed film coefficients on both sides, constant air and gas temperatures, no sun and
+ * no radiation: the setting of the closed-form checks (series resistances, lumped capacitance).
+ */
+export function fixedFilmInputs(
+  o: { layers: readonly LayerInput[]; hIn: number; hOut: number; gasK: number; airK: number; composition?: ModelInputs['flue']['composition'] } & Partial<Omit<ModelInputs, 'layers'>>,
+): ModelInputs {
+  const { hIn, hOut, gasK, airK, composition, ...over } = o;
+  const base = baseInputs({ layers: o.layers });
+  return baseInputs({
+    outside: { filmCoefficient: hOut, radiation: { kind: 'none' }, sun: false },
+    weather: { kind: 'source', source: airSource(() => airK) },
+    flue: { ...base.flue, ...(composition ? { composition } : {}), filmCoefficient: hIn, schedule: { daily: [{ clockS: 0, inletTemperatureK: gasK, massFlow: 1 }] } },
+    ...over,
+  });
+}

@@ -7,7 +7,7 @@
 import { describe, it, expect } from 'vitest';
 import { simulate } from '../../src/model/simulate.ts';
 import type { RunResult } from '../../src/model/timeseries.ts';
-import { baseInputs, constantMaterial, layer, airSource } from './fixtures.ts';
+import { baseInputs, constantMaterial, layer, airSource, fixedFilmInputs } from './fixtures.ts';
 
 const DAY = 86400;
 
@@ -35,12 +35,7 @@ describe('steady layered cylinder with fixed film coefficients', () => {
   const tAir = 283.15;
 
   it('matches the series-resistance heat flow within 0.1 % and interface temperatures within 0.05 K', () => {
-    const inputs = baseInputs({
-      layers: [layer(liner, t[0]!, 6), layer(insulation, t[1]!, 6, contact), layer(shell, t[2]!, 2)],
-      outside: { filmCoefficient: hOut, radiation: { kind: 'none' }, sun: false },
-      weather: { kind: 'source', source: airSource(() => tAir) },
-      flue: { ...baseInputs({ layers: [] }).flue, filmCoefficient: hIn, schedule: { daily: [{ clockS: 0, inletTemperatureK: tGas, massFlow: 1 }] } },
-    });
+    const inputs = fixedFilmInputs({ layers: [layer(liner, t[0]!, 6), layer(insulation, t[1]!, 6, contact), layer(shell, t[2]!, 2)], hIn, hOut, gasK: tGas, airK: tAir });
     const r = simulate(inputs);
     const radii = [ri, ri + t[0]!, ri + t[0]! + t[1]!, ri + t[0]! + t[1]! + t[2]!];
     const R = [
@@ -175,11 +170,12 @@ describe('thin steel wall heated from inside', () => {
     const tGas = 473.15;
     const tInit = 293.15;
     const r = simulate(
-      baseInputs({
+      fixedFilmInputs({
         layers: [layer(steel, thickness, 2)],
-        outside: { filmCoefficient: 1e-9, radiation: { kind: 'none' }, sun: false },
-        weather: { kind: 'source', source: airSource(() => tInit) },
-        flue: { ...baseInputs({ layers: [] }).flue, filmCoefficient: hIn, schedule: { daily: [{ clockS: 0, inletTemperatureK: tGas, massFlow: 1 }] } },
+        hIn,
+        hOut: 1e-9, // outside practically adiabatic
+        gasK: tGas,
+        airK: tInit,
         run: { mode: 'cycle', length: { kind: 'days', days: 1 }, outputInterval: 300, initial: 'cold', integrator: 'implicit', rtol: 1e-7, atol: 1e-5 },
       }),
     );

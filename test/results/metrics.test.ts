@@ -8,7 +8,7 @@ import { simulate } from '../../src/model/simulate.ts';
 import { summarise, thermalStressIndicator, timeToStayAbove, timeToReach, fractionBelowZero } from '../../src/results/metrics.ts';
 import { flueGasDewPoints } from '../../src/flue/dewPoint.ts';
 import type { ModelInputs, LimitsInput } from '../../src/model/inputs.ts';
-import { baseInputs, constantMaterial, layer, airSource } from '../model/fixtures.ts';
+import { constantMaterial, layer, fixedFilmInputs } from '../model/fixtures.ts';
 import { loadScenarioFile } from '../../src/scenario/load.ts';
 
 describe('thermal-stress indicator', () => {
@@ -26,12 +26,7 @@ describe('thermal-stress indicator', () => {
     const tAir = 293.15;
     const hIn = 25;
     const hOut = 15;
-    const inputs = baseInputs({
-      layers: [layer(liner, 0.1, 6), layer(ins, 0.1, 6)],
-      outside: { filmCoefficient: hOut, radiation: { kind: 'none' }, sun: false },
-      weather: { kind: 'source', source: airSource(() => tAir) },
-      flue: { ...baseInputs({ layers: [] }).flue, filmCoefficient: hIn, schedule: { daily: [{ clockS: 0, inletTemperatureK: tGas, massFlow: 1 }] } },
-    });
+    const inputs = fixedFilmInputs({ layers: [layer(liner, 0.1, 6), layer(ins, 0.1, 6)], hIn, hOut, gasK: tGas, airK: tAir });
     const result = simulate(inputs);
     const summary = summarise({ inputs, result, version: 'test' });
     const R = [1 / (2 * Math.PI * ri * hIn), Math.log(1.1) / (2 * Math.PI * 1.0), Math.log(1.2 / 1.1) / (2 * Math.PI * 0.1), 1 / (2 * Math.PI * 1.2 * hOut)];
@@ -54,11 +49,13 @@ describe('warm-up of a thin steel stack', () => {
   const tGas = 473.15;
   const tAir = 293.15;
   const composition = { N2: 0.73, O2: 0.03, CO2: 0.09, H2O: 0.15, SO2: 0, SO3: 20e-6 };
-  const inputs: ModelInputs = baseInputs({
+  const inputs: ModelInputs = fixedFilmInputs({
     layers: [layer(steel, thickness, 2)],
-    outside: { filmCoefficient: 1e-9, radiation: { kind: 'none' }, sun: false },
-    weather: { kind: 'source', source: airSource(() => tAir) },
-    flue: { ...baseInputs({ layers: [] }).flue, composition, filmCoefficient: hIn, schedule: { daily: [{ clockS: 0, inletTemperatureK: tGas, massFlow: 1 }] } },
+    hIn,
+    hOut: 1e-9, // outside practically adiabatic
+    gasK: tGas,
+    airK: tAir,
+    composition,
     run: { mode: 'warmup', length: { kind: 'days', days: 1 }, outputInterval: 60, initial: 'cold', integrator: 'implicit', rtol: 1e-7, atol: 1e-5, firingStartClockS: 6 * 3600 },
     limits: { acidDewMarginK: 5, waterDewMarginK: 0, shellTouchK: 333.15 },
   });
