@@ -10,7 +10,7 @@
  *    with the inside correlation switched off; the differences are their costs.
  * 4. Charts: the time to render every chart of the demo.
  */
-import { loadScenarioFile } from '../src/scenario/load.ts';
+import { loadScenarioFile } from '../src/input/scenario/load.ts';
 import { simulate } from '../src/model/simulate.ts';
 import type { ModelInputs } from '../src/model/inputs.ts';
 import type { RunResult } from '../src/model/timeseries.ts';
@@ -108,8 +108,8 @@ console.log('');
 
 // ---- 4. charts ----
 try {
-  const { renderAllCharts } = await import('../src/charts/index.ts');
-  const { summarise } = await import('../src/results/metrics.ts');
+  const { renderAllCharts } = await import('../src/output/charts/index.ts');
+  const { summarise } = await import('../src/analysis/metrics.ts');
   const demo = loadScenarioFile('scenarios/demo.yaml').inputs;
   const result = simulate(demo);
   const summary = summarise({ inputs: demo, result, version: 'bench' });

@@ -7,24 +7,24 @@
  * The chain is one-way: scenario → model inputs → mesh → integrator → time series → metrics → reports.
  */
 import { readFileSync } from 'node:fs';
-import { validateScenario, loadScenarioFile, type LoadedScenario } from './scenario/load.ts';
+import { validateScenario, loadScenarioFile, type LoadedScenario } from './input/scenario/load.ts';
 import { simulate, type SimulateOptions } from './model/simulate.ts';
-import { summarise } from './results/metrics.ts';
-import { summaryJson, timeseriesCsv, segmentsCsv, writeArtefactsAtomically, type Artefact } from './results/write.ts';
+import { summarise } from './analysis/metrics.ts';
+import { summaryJson, timeseriesCsv, segmentsCsv, writeArtefactsAtomically, type Artefact } from './output/write.ts';
 import type { ModelInputs } from './model/inputs.ts';
 import type { RunResult } from './model/timeseries.ts';
-import type { Summary } from './results/summary.ts';
+import type { Summary } from './analysis/summary.ts';
 
-export { loadScenarioFile, validateScenario } from './scenario/load.ts';
-export { ScenarioError } from './scenario/errors.ts';
-export { scenarioSchema, scenarioJsonSchema, type Scenario } from './scenario/schema.ts';
+export { loadScenarioFile, validateScenario } from './input/scenario/load.ts';
+export { ScenarioError } from './input/scenario/errors.ts';
+export { scenarioSchema, scenarioJsonSchema, type Scenario } from './input/scenario/schema.ts';
 export { simulate, SimulationError } from './model/simulate.ts';
-export { summarise, thermalStressIndicator } from './results/metrics.ts';
-export { resultSheet } from './results/console.ts';
-export { MATERIALS, findMaterial, materialNames } from './materials/index.ts';
+export { summarise, thermalStressIndicator } from './analysis/metrics.ts';
+export { resultSheet } from './output/console.ts';
+export { MATERIALS, findMaterial, materialNames } from './physics/materials/index.ts';
 export type { ModelInputs } from './model/inputs.ts';
 export type { RunResult, TimeSeries, EnergyAccount } from './model/timeseries.ts';
-export type { Summary, Verdict } from './results/summary.ts';
+export type { Summary, Verdict } from './analysis/summary.ts';
 
 /** The tool's version, from package.json. */
 export const VERSION: string = (JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string }).version;
@@ -78,8 +78,8 @@ export async function runArtefacts(run: Run, options: WriteOptions = {}): Promis
     { fileName: 'segments.csv', content: segmentsCsv(run.result.series) },
   ];
   if (options.charts !== false) {
-    const { renderAllCharts } = await import('./charts/index.ts');
-    const { renderReportHtml } = await import('./results/report.ts');
+    const { renderAllCharts } = await import('./output/charts/index.ts');
+    const { renderReportHtml } = await import('./output/report.ts');
     const charts = renderAllCharts(run.result.series, run.summary, run.inputs, {
       width: options.chartWidth ?? 1000,
       height: options.chartHeight ?? 600,

@@ -9,16 +9,16 @@
 import { Command, CommanderError, Option } from 'commander';
 import { resolve, join } from 'node:path';
 import { SingleBar, Presets } from 'cli-progress';
-import { loadScenarioFile, type LoadedScenario } from '../scenario/load.ts';
-import { ScenarioError } from '../scenario/errors.ts';
-import { scenarioJsonSchema } from '../scenario/schema.ts';
+import { loadScenarioFile, type LoadedScenario } from '../input/scenario/load.ts';
+import { ScenarioError } from '../input/scenario/errors.ts';
+import { scenarioJsonSchema } from '../input/scenario/schema.ts';
 import { SimulationError } from '../model/simulate.ts';
-import { describeMaterialsTable } from '../materials/index.ts';
-import { table } from '../results/console.ts';
-import { resultSheet, comparisonSheet } from '../results/console.ts';
-import { compareBuildUps, comparisonCsv } from '../results/compare.ts';
-import { writeArtefactsAtomically } from '../results/write.ts';
-import { parseClockTime } from '../scenario/units.ts';
+import { describeMaterialsTable } from '../physics/materials/index.ts';
+import { table } from '../output/console.ts';
+import { resultSheet, comparisonSheet } from '../output/console.ts';
+import { compareBuildUps, comparisonCsv } from '../analysis/compare.ts';
+import { writeArtefactsAtomically } from '../output/write.ts';
+import { parseClockTime } from '../input/scenario/units.ts';
 import { runScenario, writeRun, VERSION } from '../index.ts';
 import type { ModelInputs } from '../model/inputs.ts';
 
@@ -189,7 +189,7 @@ export function buildProgram(): Command {
     .option('--json', 'print the library as JSON')
     .action(async (opts: { json?: boolean }) => {
       if (opts.json) {
-        const { MATERIALS } = await import('../materials/index.ts');
+        const { MATERIALS } = await import('../physics/materials/index.ts');
         process.stdout.write(`${JSON.stringify(MATERIALS, null, 2)}\n`);
         return;
       }

@@ -4,12 +4,12 @@
  * segment and every Newton iteration at that instant.
  */
 import type { ModelInputs } from './inputs.ts';
-import type { SiteClock } from '../sun/clock.ts';
-import type { WeatherSource } from '../weather/types.ts';
-import type { FiringSchedule } from '../flue/schedule.ts';
-import { solarAt, absorbedSunPerMetre } from '../sun/irradiance.ts';
-import { SECONDS_PER_DAY } from '../properties/constants.ts';
-import { skyTemperatureSwinbank, skyEmissivityBerdahlMartin, skyEmissivityCloudCorrection, skyTemperatureFromEmissivity } from '../correlations/radiation.ts';
+import type { SiteClock } from './clock.ts';
+import type { WeatherSource } from '../physics/outside/weather.ts';
+import type { FiringSchedule } from './firing.ts';
+import { solarAt, absorbedSunPerMetre } from '../physics/sun/irradiance.ts';
+import { SECONDS_PER_DAY } from '../physics/constants.ts';
+import { skyTemperatureSwinbank, skyEmissivityBerdahlMartin, skyEmissivityCloudCorrection, skyTemperatureFromEmissivity } from '../physics/correlations/radiation.ts';
 
 export interface Drivers {
   t: number;

@@ -3,8 +3,8 @@
  * strings and no optional ambiguity left. The scenario module produces this from a file; library
  * users may build it directly. Nothing in here refers back to the scenario file format.
  */
-import type { Material } from '../materials/types.ts';
-import type { WeatherSource } from '../weather/types.ts';
+import type { WallLayer } from '../physics/wall/mesh.ts';
+import type { WeatherSource } from '../physics/outside/weather.ts';
 
 export interface SiteInput {
   readonly name: string;
@@ -27,16 +27,8 @@ export interface StackInput {
   readonly segments: number;
 }
 
-export interface LayerInput {
-  /** Label for reports, e.g. `liner`, `insulation`, `shell`. */
-  readonly label: string;
-  readonly material: Material;
-  readonly thickness: number;
-  /** Cells across the layer, or `auto` (sized to the daily penetration depth). Ignored for gaps. */
-  readonly cells: number | 'auto';
-  /** Contact resistance to the next layer outward, m² K/W (0 = perfect contact). */
-  readonly contactResistanceToNext: number;
-}
+/** One wall layer, inside → outside (the mesh's `WallLayer`). */
+export type LayerInput = WallLayer;
 
 export interface SurfaceInput {
   readonly emissivity: number;

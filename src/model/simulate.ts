@@ -4,24 +4,24 @@
  */
 import type { ModelInputs } from './inputs.ts';
 import type { TimeSeries, RunResult, EnergyAccount } from './timeseries.ts';
-import { makeSiteClock } from '../sun/clock.ts';
-import { buildWallMesh, nodeEnthalpyChange, type WallMesh } from '../wall/mesh.ts';
+import { makeSiteClock } from './clock.ts';
+import { buildWallMesh, nodeEnthalpyChange, type WallMesh } from '../physics/wall/mesh.ts';
 import { StackWallSystem, makeSegmentDiagnostics, AUX_SIZE, AUX_GAS_TO_WALL, AUX_CONVECTION, AUX_RADIATION, AUX_SUN, type StackGeometry } from './system.ts';
 import type { DriverContext } from './drivers.ts';
 import { INTEGRATORS } from '../solver/index.ts';
 import { steadyState, averagedOverInstants } from './steady.ts';
 import { IntegrationError } from '../solver/types.ts';
-import { makeDesignDay } from '../weather/designDay.ts';
-import { parseWeatherCsv } from '../weather/csvFile.ts';
-import { windAtHeight } from '../weather/wind.ts';
-import type { WeatherSource } from '../weather/types.ts';
-import { makeFiringSchedule, type FiringScheduleSpec } from '../flue/schedule.ts';
-import { makeGasPropertyTable, airAsFlueGas } from '../properties/flueGas.ts';
-import { flueGasDewPoints } from '../flue/dewPoint.ts';
-import { stackDraftPa } from '../flue/draft.ts';
-import { airDensityIdealGas, airPressureAtElevation } from '../properties/air.ts';
-import { SECONDS_PER_DAY } from '../properties/constants.ts';
-import { checkValidity, type CorrelationName } from '../correlations/table.ts';
+import { makeDesignDay } from '../input/weather/designDay.ts';
+import { parseWeatherCsv } from '../input/weather/csvFile.ts';
+import { windAtHeight } from '../physics/outside/wind.ts';
+import type { WeatherSource } from '../physics/outside/weather.ts';
+import { makeFiringSchedule, type FiringScheduleSpec } from './firing.ts';
+import { makeGasPropertyTable, airAsFlueGas } from '../physics/properties/flueGas.ts';
+import { flueGasDewPoints } from '../physics/flue/dewPoint.ts';
+import { stackDraftPa } from '../physics/flue/draft.ts';
+import { airDensityIdealGas, airPressureAtElevation } from '../physics/properties/air.ts';
+import { SECONDS_PER_DAY } from '../physics/constants.ts';
+import { checkValidity, type CorrelationName } from '../physics/correlations/registry.ts';
 
 export interface SimulateOptions {
   /** Called now and then with the fraction of the run done (0–1). */

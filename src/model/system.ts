@@ -10,14 +10,14 @@
  */
 import type { OdeSystem } from '../solver/types.ts';
 import type { ModelInputs } from './inputs.ts';
-import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../wall/mesh.ts';
-import { gapConductancePerMetre } from '../wall/gap.ts';
+import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../physics/wall/mesh.ts';
+import { gapConductancePerMetre } from '../physics/wall/gap.ts';
 import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
-import { airPropertiesAt, airPropertiesInto } from '../properties/air.ts';
-import { outsideFilmCoefficient } from '../correlations/external.ts';
-import { nuPipeBlended } from '../correlations/internal.ts';
-import { radiationToSkyAndGround, radiationCoefficientToSkyAndGround } from '../correlations/radiation.ts';
-import type { GasPropertyLookup } from '../properties/flueGas.ts';
+import { airPropertiesAt, airPropertiesInto } from '../physics/properties/air.ts';
+import { outsideFilmCoefficient } from '../physics/correlations/external.ts';
+import { nuPipeBlended } from '../physics/correlations/internal.ts';
+import { radiationToSkyAndGround, radiationCoefficientToSkyAndGround } from '../physics/correlations/radiation.ts';
+import type { GasPropertyLookup } from '../physics/properties/flueGas.ts';
 
 export const AUX_GAS_TO_WALL = 0;
 export const AUX_CONVECTION = 1;

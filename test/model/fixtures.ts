@@ -3,9 +3,9 @@
  * with fixed film coefficients, no sun and no radiation unless a test asks for them. Invented
  * test data; every check against it compares with an analytic result named in the test.
  */
-import type { Material } from '../../src/materials/types.ts';
+import type { Material } from '../../src/physics/materials/types.ts';
 import type { ModelInputs, LayerInput } from '../../src/model/inputs.ts';
-import type { WeatherSource, AirState } from '../../src/weather/types.ts';
+import type { WeatherSource, AirState } from '../../src/physics/outside/weather.ts';
 
 /** A solid with constant k, ρ, c_p. */
 export function constantMaterial(name: string, conductivity: number, density: number, specificHeat: number, extra: Partial<Material> = {}): Material {

@@ -4,9 +4,9 @@
  */
 import { describe, it, expect } from 'vitest';
 import { simulate } from '../../src/model/simulate.ts';
-import { makeGasPropertyTable } from '../../src/properties/flueGas.ts';
-import { airDensityIdealGas } from '../../src/properties/air.ts';
-import { STANDARD_GRAVITY } from '../../src/properties/constants.ts';
+import { makeGasPropertyTable } from '../../src/physics/properties/flueGas.ts';
+import { airDensityIdealGas } from '../../src/physics/properties/air.ts';
+import { STANDARD_GRAVITY } from '../../src/physics/constants.ts';
 import { baseInputs, constantMaterial, layer, airSource } from './fixtures.ts';
 
 const brick = constantMaterial('brick', 0.9, 2000, 850);

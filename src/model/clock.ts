@@ -1,0 +1,102 @@
+/**
+ * Site clock: maps the run's time axis (seconds since local midnight of the first day, in the
+ * site's IANA time zone) to UTC instants and to local clock time, through @date-fns/tz so that
+ * daylight-saving changes are handled by the time-zone database, not by hand.
+ *
+ * The run's time axis is uniform: day n covers t ∈ [n·86400, (n+1)·86400) s. On a day when the
+ * clocks change, local clock time and the run's time differ by the shift; `localSecondsOfDay`
+ * always reports the true local clock reading.
+ */
+import { TZDate } from '@date-fns/tz';
+import { SECONDS_PER_DAY } from '../physics/constants.ts';
+
+export interface SiteClock {
+  /** IANA time zone, e.g. `Europe/Oslo`. */
+  readonly timeZone: string;
+  /** First day of the run, `YYYY-MM-DD` (local). */
+  readonly startDate: string;
+  /** UTC instant (ms) of local midnight starting the first day. */
+  readonly startUtcMs: number;
+  /** UTC instant (ms) of run time `t` (s). */
+  utcMs(t: number): number;
+  /** Local clock reading at run time `t`, seconds after local midnight (0 ≤ s < 86400 except on DST days). */
+  localSecondsOfDay(t: number): number;
+  /** Whole days since the start at run time `t` (day index by run time, 0-based). */
+  dayIndex(t: number): number;
+  /** ISO 8601 local time with offset at run time `t`, e.g. `2026-07-14T13:00:00+02:00`. */
+  isoLocal(t: number): string;
+  /** Run time (s) of local clock time `secondsOfDay` on the local date `dayIndex` days after the start. */
+  runTimeOfLocal(dayIndex: number, secondsOfDay: number): number;
+}
+
+const DATE_RE = /^(\d{4})-(\d{2})-(\d{2})$/;
+
+/** Build the clock of a site. Throws a RangeError with a plain message for a bad zone or date. */
+export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
+  const m = DATE_RE.exec(startDate);
+  if (!m) throw new RangeError(`start date "${startDate}" is not of the form YYYY-MM-DD`);
+  if (!isValidTimeZone(timeZone)) throw new RangeError(`time zone "${timeZone}" is not a known IANA zone (e.g. Europe/Oslo, America/Chicago, UTC)`);
+  const [y, mo, d] = [Number(m[1]), Number(m[2]) - 1, Number(m[3])];
+  const start = new TZDate(y, mo, d, 0, 0, 0, timeZone);
+  const startUtcMs = start.getTime();
+  if (!Number.isFinite(startUtcMs) || start.getDate() !== d) throw new RangeError(`start date "${startDate}" is not a calendar date`);
+
+  // UTC offsets change only at whole quarter hours of UTC in every zone of the tz database, so
+  // the offset is cached per 15-minute block of UTC (the time-zone lookup is costly).
+  const offsetCache = new Map<number, number>();
+  const offsetMs = (utcMs: number): number => {
+    const block = Math.floor(utcMs / 900_000);
+    let off = offsetCache.get(block);
+    if (off === undefined) {
+      off = -new TZDate(block * 900_000, timeZone).getTimezoneOffset() * 60_000;
+      offsetCache.set(block, off);
+    }
+    return off;
+  };
+  return {
+    timeZone,
+    startDate,
+    startUtcMs,
+    utcMs: (t) => startUtcMs + t * 1000,
+    localSecondsOfDay(t) {
+      const utc = startUtcMs + t * 1000;
+      const localMs = utc + offsetMs(utc);
+      const s = (localMs / 1000) % SECONDS_PER_DAY;
+      return s < 0 ? s + SECONDS_PER_DAY : s;
+    },
+    dayIndex: (t) => Math.floor(t / SECONDS_PER_DAY + 1e-9),
+    isoLocal(t) {
+      // local wall-clock fields from the UTC instant shifted by the zone's offset at that instant
+      const utc = startUtcMs + Math.round(t) * 1000;
+      const offMs = offsetMs(utc);
+      const d = new Date(utc + offMs);
+      const off = Math.round(offMs / 60_000);
+      const sign = off >= 0 ? '+' : '-';
+      const p2 = (n: number) => String(Math.trunc(Math.abs(n))).padStart(2, '0');
+      return `${d.getUTCFullYear()}-${p2(d.getUTCMonth() + 1)}-${p2(d.getUTCDate())}T${p2(d.getUTCHours())}:${p2(d.getUTCMinutes())}:${p2(d.getUTCSeconds())}${sign}${p2(off / 60)}:${p2(off % 60)}`;
+    },
+    runTimeOfLocal(dayIndex, secondsOfDay) {
+      const h = Math.floor(secondsOfDay / 3600);
+      const rest = secondsOfDay - h * 3600;
+      const mi = Math.floor(rest / 60);
+      const s = rest - mi * 60;
+      const dt = new TZDate(y, mo, d + dayIndex, h, mi, Math.floor(s), timeZone);
+      return (dt.getTime() - startUtcMs) / 1000 + (s - Math.floor(s));
+    },
+  };
+}
+
+/** True when `timeZone` is an IANA zone known to this Node runtime. */
+export function isValidTimeZone(timeZone: string): boolean {
+  if (KNOWN_ZONES.has(timeZone)) return true;
+  try {
+    new Intl.DateTimeFormat('en-US', { timeZone });
+    KNOWN_ZONES.add(timeZone);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** Zones already checked (constructing a formatter to check one is slow). */
+const KNOWN_ZONES = new Set<string>();

@@ -1,0 +1,196 @@
+/**
+ * Firing schedules: inlet gas temperature and mass flow against LOCAL CLOCK TIME (seconds after
+ * local midnight), piecewise linear between the points of a day.
+ *
+ * Conventions:
+ * - A ramp is two points at different times; values change linearly between them.
+ * - A step is two points at the SAME time: the value jumps there; at the step time itself the later
+ *   point applies. Three or more points at one time are an error.
+ * - Before the first point of a day and after the last, the values HOLD CONSTANT at that point's
+ *   values (they do not wrap to the previous or next day). Times beyond 86 400 s (a 25-hour day at a
+ *   daylight-saving change) therefore hold the last point. If one day ends on values different from
+ *   those the next day starts with, the inlet conditions step at midnight — write matching
+ *   end/start points to avoid it.
+ * - `daily`: the same points every day. `perDay`: a list of day-schedules used in turn; day i uses
+ *   perDay[i mod n] (e.g. seven entries for a weekly cycle).
+ * - Off state: a burner that is off still lets a small natural-draft flow through the flue. Any
+ *   scheduled mass flow below the floor `minimumMassFlow` is raised to the floor. Default floor: 2 %
+ *   of the largest scheduled flow (common practice: a few per cent of full-load flow passes through
+ *   a stack with the burner off and its damper open). The inlet temperature in an off period is the
+ *   one written at the off points (e.g. the boiler-house temperature, or the standby temperature of
+ *   the boiler). `firing` is true while the scheduled flow exceeds the floor.
+ */
+import { GAS_CONSTANT, KELVIN_OFFSET, SECONDS_PER_DAY, STANDARD_PRESSURE } from '../physics/constants.ts';
+
+/** One point of a day-schedule. */
+export interface FiringPoint {
+  /** Local clock time, seconds after local midnight, 0…86 400. */
+  readonly clockS: number;
+  /** Gas temperature at the flue inlet, K. */
+  readonly inletTemperatureK: number;
+  /** Flue gas mass flow, kg/s (0 for burner off; raised to the floor). */
+  readonly massFlow: number;
+}
+
+interface FiringOptions {
+  /** Floor on the mass flow (natural draft with the burner off), kg/s. Default 2 % of the largest scheduled flow. */
+  readonly minimumMassFlow?: number;
+}
+
+export type FiringScheduleSpec =
+  | (FiringOptions & { readonly daily: readonly FiringPoint[]; readonly perDay?: undefined })
+  | (FiringOptions & { readonly perDay: readonly (readonly FiringPoint[])[]; readonly daily?: undefined });
+
+/** Inlet conditions at one instant. */
+export interface FiringState {
+  readonly inletTemperatureK: number;
+  /** Mass flow after the floor is applied, kg/s. */
+  readonly massFlow: number;
+  /** True while the scheduled flow is above the floor. */
+  readonly firing: boolean;
+}
+
+export interface FiringSchedule {
+  /** Inlet conditions on day `dayIndex` (0-based, by run day) at local clock time `clockS`. */
+  at(dayIndex: number, clockS: number): FiringState;
+  /**
+   * Clock times (s) on day `dayIndex` where the inlet conditions change slope or step: every point,
+   * plus the instants where a ramp crosses the flow floor. Sorted, without repeats.
+   */
+  corners(dayIndex: number): number[];
+  /** The flow floor in use, kg/s. */
+  readonly minimumMassFlow: number;
+}
+
+/** Default floor as a fraction of the largest scheduled flow (common practice; see module note). */
+export const DEFAULT_OFF_FLOW_FRACTION = 0.02;
+
+/** Below this an inlet temperature is taken to be a °C value given by mistake (K expected). */
+const LOWEST_PLAUSIBLE_INLET_K = 200;
+/** Above this the flue-gas property fits are out of range. */
+const HIGHEST_PLAUSIBLE_INLET_K = 3000;
+
+function daysOf(spec: FiringScheduleSpec): { label: (d: number) => string; days: readonly (readonly FiringPoint[])[] } {
+  if (spec.daily !== undefined) return { label: () => 'daily', days: [spec.daily] };
+  return { label: (d) => `perDay[${d}]`, days: spec.perDay ?? [] };
+}
+
+/**
+ * Everything wrong with a schedule, as messages naming the offending point and value; empty when
+ * the schedule is usable.
+ */
+export function validateFiringSchedule(spec: FiringScheduleSpec): string[] {
+  const out: string[] = [];
+  const s = spec as { daily?: unknown; perDay?: unknown };
+  if (s.daily !== undefined && s.perDay !== undefined) out.push('give either daily or perDay, not both');
+  if (s.daily === undefined && s.perDay === undefined) return [...out, 'give daily (points for every day) or perDay (a list of day-schedules)'];
+  if (s.perDay !== undefined && (!Array.isArray(s.perDay) || s.perDay.length === 0)) return [...out, 'perDay must list at least one day-schedule'];
+  const { label, days } = daysOf(spec);
+  let largest = 0;
+  days.forEach((points, d) => {
+    const where = label(d);
+    if (!Array.isArray(points) || points.length === 0) {
+      out.push(`${where}: needs at least one point`);
+      return;
+    }
+    points.forEach((p, i) => {
+      const at = `${where}[${i}]`;
+      if (!Number.isFinite(p.clockS) || p.clockS < 0 || p.clockS > SECONDS_PER_DAY)
+        out.push(`${at}: clockS ${p.clockS} is outside 0…86400 s (0…24 h after local midnight)`);
+      if (!Number.isFinite(p.massFlow) || p.massFlow < 0) out.push(`${at}: massFlow ${p.massFlow} kg/s must be ≥ 0`);
+      else largest = Math.max(largest, p.massFlow);
+      if (!Number.isFinite(p.inletTemperatureK) || p.inletTemperatureK <= 0)
+        out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} is not a physical temperature (kelvin > 0)`);
+      else if (p.inletTemperatureK < LOWEST_PLAUSIBLE_INLET_K)
+        out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} K is below ${LOWEST_PLAUSIBLE_INLET_K} K — was °C given where kelvin is expected (°C + ${KELVIN_OFFSET})?`);
+      else if (p.inletTemperatureK > HIGHEST_PLAUSIBLE_INLET_K)
+        out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} K is above ${HIGHEST_PLAUSIBLE_INLET_K} K, beyond any flue gas`);
+      if (i > 0) {
+        const prev = points[i - 1].clockS;
+        if (p.clockS < prev) out.push(`${at}: clockS ${p.clockS} goes back before the previous point's ${prev} (times must not decrease)`);
+        else if (i > 1 && p.clockS === prev && points[i - 2].clockS === prev)
+          out.push(`${at}: clockS ${p.clockS} is the third point at the same time (two points at one time make a step; more are ambiguous)`);
+      }
+    });
+  });
+  if (spec.minimumMassFlow !== undefined) {
+    if (!Number.isFinite(spec.minimumMassFlow) || spec.minimumMassFlow < 0) out.push(`minimumMassFlow ${spec.minimumMassFlow} kg/s must be ≥ 0`);
+    else if (spec.minimumMassFlow === 0 && largest === 0) out.push('every scheduled flow is 0 and minimumMassFlow is 0: the gas balance needs some flow');
+  } else if (largest === 0 && out.length === 0) {
+    out.push('every scheduled flow is 0: give minimumMassFlow (the natural-draft flow with the burner off)');
+  }
+  return out;
+}
+
+/** Scheduled (un-floored) values at clock time `clockS` within one day's points. */
+function interpolate(points: readonly FiringPoint[], clockS: number): { inletTemperatureK: number; massFlow: number } {
+  const n = points.length;
+  if (clockS < points[0].clockS) return points[0];
+  // last point with time ≤ clockS (right-continuous at steps)
+  let i = 0;
+  while (i + 1 < n && points[i + 1].clockS <= clockS) i++;
+  if (i === n - 1) return points[n - 1];
+  const a = points[i];
+  const b = points[i + 1];
+  const f = (clockS - a.clockS) / (b.clockS - a.clockS);
+  return {
+    inletTemperatureK: a.inletTemperatureK + f * (b.inletTemperatureK - a.inletTemperatureK),
+    massFlow: a.massFlow + f * (b.massFlow - a.massFlow),
+  };
+}
+
+/**
+ * Build a firing schedule; throws a RangeError listing every problem `validateFiringSchedule` finds.
+ * Example: daily [{0 h, 300 K, 0}, {6 h, 300 K, 0}, {7 h, 500 K, 10}, {22 h, 500 K, 10}, {23 h, 300 K, 0}]
+ * → at(0, 6.5 h) = { 400 K, 5 kg/s, firing }, at(0, 3 h) = { 300 K, 0.2 kg/s (floor), not firing }.
+ */
+export function makeFiringSchedule(spec: FiringScheduleSpec): FiringSchedule {
+  const problems = validateFiringSchedule(spec);
+  if (problems.length) throw new RangeError(`firing schedule: ${problems.join('; ')}`);
+  const { days } = daysOf(spec);
+  const largest = Math.max(...days.flatMap((pts) => pts.map((p) => p.massFlow)));
+  const floor = spec.minimumMassFlow ?? DEFAULT_OFF_FLOW_FRACTION * largest;
+  const dayPoints = (dayIndex: number) => days[((Math.floor(dayIndex) % days.length) + days.length) % days.length];
+
+  const cornerCache = days.map((points) => {
+    const set = new Set<number>(points.map((p) => p.clockS));
+    for (let i = 0; i + 1 < points.length; i++) {
+      const a = points[i];
+      const b = points[i + 1];
+      if (b.clockS === a.clockS) continue;
+      // a ramp crossing the floor: the floored flow has a kink there
+      if ((a.massFlow - floor) * (b.massFlow - floor) < 0)
+        set.add(a.clockS + ((floor - a.massFlow) / (b.massFlow - a.massFlow)) * (b.clockS - a.clockS));
+    }
+    return [...set].sort((x, y) => x - y);
+  });
+
+  return {
+    minimumMassFlow: floor,
+    at(dayIndex, clockS) {
+      const v = interpolate(dayPoints(dayIndex), clockS);
+      return {
+        inletTemperatureK: v.inletTemperatureK,
+        massFlow: Math.max(v.massFlow, floor),
+        firing: v.massFlow > floor,
+      };
+    },
+    corners(dayIndex) {
+      return [...cornerCache[((Math.floor(dayIndex) % days.length) + days.length) % days.length]];
+    },
+  };
+}
+
+/** Reference conditions of the normal cubic metre: 0 °C and 101 325 Pa (DIN 1343). */
+export const NORMAL_TEMPERATURE_K = KELVIN_OFFSET;
+export const NORMAL_PRESSURE_PA = STANDARD_PRESSURE;
+
+/**
+ * Mass flow, kg/s, from a volume flow at normal conditions (Nm³/h at 0 °C, 101 325 Pa), ideal gas:
+ * ṁ = V̇_N/3600 · p_N M / (R T_N). `molarMass` in kg/mol.
+ * Example: 10 000 Nm³/h of air (0.028964 kg/mol) → 2.778 m³/s × 1.2922 kg/m³ = 3.590 kg/s.
+ */
+export function massFlowFromNormalVolumeFlow(normalCubicMetresPerHour: number, molarMass: number): number {
+  const normalDensity = (NORMAL_PRESSURE_PA * molarMass) / (GAS_CONSTANT * NORMAL_TEMPERATURE_K);
+  return (normalCubicMetresPerHour / 3600) * normalDensity;
+}

@@ -1,0 +1,152 @@
+/**
+ * The console result sheet: verdicts first, then the figures behind them, then the cautions.
+ * Plain text, fixed-width columns, readable in any terminal and in a CI log.
+ */
+import type { Summary, Verdict } from '../analysis/summary.ts';
+import type { Comparison } from '../analysis/compare.ts';
+
+const STATUS_WORD: Record<Verdict['status'], string> = { pass: 'PASS', fail: 'FAIL', 'not-set': '—' };
+
+/** Lay out rows in columns padded to the widest cell. */
+export function table(rows: readonly (readonly string[])[], align: readonly ('l' | 'r')[] = []): string[] {
+  const widths: number[] = [];
+  for (const r of rows) r.forEach((cell, i) => (widths[i] = Math.max(widths[i] ?? 0, [...cell].length)));
+  return rows.map((r) => r.map((cell, i) => (align[i] === 'r' ? cell.padStart(widths[i]!) : cell.padEnd(widths[i]!))).join('  ').trimEnd());
+}
+
+const num = (v: number | null | undefined, digits = 1): string => (v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(digits));
+const hhmm = (iso: string | null): string => (iso ? iso.slice(0, 16).replace('T', ' ') : '—');
+
+/** The whole sheet as lines. */
+export function resultSheet(s: Summary, outDir?: string): string[] {
+  const lines: string[] = [];
+  const rule = '─'.repeat(78);
+  lines.push(rule);
+  lines.push(`stackday ${s.tool.version} · ${s.scenario.name} · ${s.scenario.site} · ${s.scenario.first_day} (${s.scenario.time_zone})`);
+  lines.push(`${s.run.mode === 'warmup' ? 'Warm-up study' : 'Daily cycle'}; figures over ${s.run.evaluated_over}; ${s.run.days_simulated} day(s) simulated`);
+  lines.push(rule);
+  lines.push(`VERDICTS   ${s.all_limits_pass ? 'every limit that was set passes' : 'AT LEAST ONE LIMIT FAILS'}`);
+  lines.push(
+    ...table(
+      [
+        ['', 'limit', 'found', 'allowed', 'unit', 'when', 'height m'],
+        ...s.verdicts.map((v) => [STATUS_WORD[v.status], v.title, num(v.governing_value), num(v.limit_value), v.unit, hhmm(v.time_local), num(v.height_m)]),
+      ],
+      ['l', 'l', 'r', 'r', 'l', 'l', 'r'],
+    ).map((l) => `  ${l}`),
+  );
+  lines.push('');
+  lines.push('PEAKS AND MINIMA');
+  lines.push(
+    ...table(
+      [
+        ['hottest shell', `${num(s.peak_shell_c)} °C`, hhmm(s.peak_shell_time), `at ${num(s.peak_shell_height_m)} m`],
+        ['hottest lining', `${num(s.peak_lining_c)} °C`, hhmm(s.peak_lining_time), `at ${num(s.peak_lining_height_m)} m`],
+        ['coldest inner surface', `${num(s.min_inner_surface_c)} °C`, hhmm(s.min_inner_surface_time), `at ${num(s.min_inner_surface_height_m)} m`],
+        ['largest through-wall ΔT', `${num(s.through_wall_max_delta_t_k)} K`, hhmm(s.through_wall_max_delta_t_time), `at ${num(s.through_wall_max_delta_t_height_m)} m`],
+      ],
+      ['l', 'r', 'l', 'l'],
+    ).map((l) => `  ${l}`),
+  );
+  lines.push('');
+  lines.push('LAYERS (daily range; ΔT across the layer; stress indicator E·α·ΔT/(2(1−ν)))');
+  lines.push(
+    ...table(
+      [
+        ['layer', 'material', 'mm', 'min °C', 'max °C', 'swing K', 'max ΔT K', 'σ MPa'],
+        ...s.layers.map((l) => [l.label, l.material, num(l.thickness_mm, 0), num(l.min_c), num(l.max_c), num(l.swing_k), num(l.max_delta_t_k), num(l.stress_indicator_mpa, 2)]),
+      ],
+      ['l', 'l', 'r', 'r', 'r', 'r', 'r', 'r'],
+    ).map((l) => `  ${l}`),
+  );
+  lines.push('');
+  lines.push('SURFACES AND INTERFACES');
+  lines.push(
+    ...table(
+      [['position', 'radius m', 'min °C', 'max °C', 'swing K'], ...s.positions.map((p) => [p.position, num(p.radius_m, 3), num(p.min_c), num(p.max_c), num(p.swing_k)])],
+      ['l', 'r', 'r', 'r', 'r'],
+    ).map((l) => `  ${l}`),
+  );
+  lines.push('');
+  lines.push('FLUE GAS AND DEW POINTS');
+  const acid = s.acid_dew_point_c === null ? 'none (no SO3)' : `${num(s.acid_dew_point_c)} °C, lowest margin ${num(s.lowest_acid_dew_margin_k)} K at ${num(s.lowest_acid_dew_margin_height_m)} m, ${hhmm(s.lowest_acid_dew_margin_time)}`;
+  lines.push(`  acid dew point   ${acid}`);
+  lines.push(`  water dew point  ${num(s.water_dew_point_c)} °C, lowest margin ${num(s.lowest_water_dew_margin_k)} K at ${num(s.lowest_water_dew_margin_height_m)} m, ${hhmm(s.lowest_water_dew_margin_time)}`);
+  const top = (arr: readonly { height_m: number; hours: number }[]) => (arr.length ? `${num(arr[arr.length - 1]!.hours)} h at the top, ${num(arr[0]!.hours)} h at the bottom` : '—');
+  lines.push(`  hours below acid dew point   ${top(s.hours_below_acid_dew)}`);
+  lines.push(`  hours below water dew point  ${top(s.hours_below_water_dew)}`);
+  lines.push(`  gas exit ${num(s.gas_exit_min_c)} to ${num(s.gas_exit_max_c)} °C; draft ${num(s.draft_min_pa)} to ${num(s.draft_max_pa)} Pa`);
+  if (s.warmup) {
+    lines.push('');
+    lines.push(`WARM-UP from firing at ${hhmm(s.warmup.firing_start_local)} (minutes; at the top of the stack)`);
+    const w = s.warmup.top;
+    lines.push(`  inner surface above water dew point + margin: ${num(w.minutes_to_water_dew, 0)} min`);
+    lines.push(`  inner surface above acid dew point + margin:  ${num(w.minutes_to_acid_dew, 0)} min`);
+    lines.push(`  shell at 90 % of its rise: ${num(w.minutes_to_shell_90_percent, 0)} min; shell past the touch limit: ${w.minutes_to_shell_touch === null ? 'never' : `${num(w.minutes_to_shell_touch, 0)} min`}`);
+    lines.push('  by height (minutes from firing; — = not within the run):');
+    lines.push(
+      ...table(
+        [
+          ['height m', 'water dew', 'acid dew', 'shell 90 %', 'shell touch'],
+          ...[...s.warmup.by_height].reverse().map((h) => [num(h.height_m), num(h.minutes_to_water_dew, 0), num(h.minutes_to_acid_dew, 0), num(h.minutes_to_shell_90_percent, 0), num(h.minutes_to_shell_touch, 0)]),
+        ],
+        ['r', 'r', 'r', 'r', 'r'],
+      ).map((l) => `    ${l}`),
+    );
+  }
+  lines.push('');
+  lines.push('HEAT (per day)');
+  lines.push(`  net loss to outside ${num(s.heat_loss_kwh_per_day)} kWh (convection ${num(s.convection_kwh_per_day)}, radiation ${num(s.radiation_kwh_per_day)}, sun absorbed ${num(s.sun_absorbed_kwh_per_day)}); from the gas ${num(s.gas_to_wall_kwh_per_day)} kWh`);
+  lines.push(`  energy residual ${num(s.energy_residual_percent, 4)} %`);
+  if (s.run.periodic_requested)
+    lines.push(`  periodic state ${s.run.periodic_reached ? 'reached' : 'NOT reached'} after ${s.run.days_simulated} days (last change ${num(s.run.periodic_last_change_k, 3)} K, tolerance ${num(s.run.periodic_tolerance_k, 3)} K)`);
+  if (s.warnings.length) {
+    lines.push('');
+    lines.push('WARNINGS');
+    for (const w of s.warnings) lines.push(`  ! ${w}`);
+  }
+  lines.push('');
+  lines.push('CAUTIONS');
+  for (const c of s.cautions) lines.push(`  · ${c}`);
+  if (outDir) {
+    lines.push('');
+    lines.push(`Results written to ${outDir}`);
+  }
+  lines.push(rule);
+  return lines;
+}
+
+/** The comparison of several build-ups as lines. */
+export function comparisonSheet(c: Comparison, cautions: readonly string[]): string[] {
+  const lines: string[] = [];
+  const rule = '─'.repeat(78);
+  lines.push(rule);
+  lines.push(`COMPARISON OF ${c.rows.length} BUILD-UPS (choice: ${c.rule})`);
+  lines.push(
+    ...table(
+      [
+        ['', 'scenario', 'limits', 'shell °C', 'lining °C', 'acid margin K', 'σ MPa', 'loss kWh/day'],
+        ...c.rows.map((r) => [
+          r.scenario === c.recommended ? '→' : '',
+          r.scenario,
+          r.all_limits_pass ? 'all pass' : `FAIL: ${r.failed_limits.join(', ')}`,
+          num(r.peak_shell_c),
+          num(r.peak_lining_c),
+          num(r.lowest_acid_dew_margin_k),
+          num(r.max_stress_indicator_mpa, 2),
+          num(r.heat_loss_kwh_per_day),
+        ]),
+      ],
+      ['l', 'l', 'l', 'r', 'r', 'r', 'r', 'r'],
+    ).map((l) => `  ${l}`),
+  );
+  lines.push('');
+  for (const r of c.rows) lines.push(`  ${r.scenario}: ${r.build_up}`);
+  lines.push('');
+  lines.push(c.recommended ? `Meets every limit at the least heat loss: ${c.recommended}` : 'No build-up meets every limit that is set.');
+  lines.push('');
+  lines.push('CAUTIONS');
+  for (const x of cautions) lines.push(`  · ${x}`);
+  lines.push(rule);
+  return lines;
+}
