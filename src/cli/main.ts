@@ -7,9 +7,9 @@
  * failed and --strict was given.
  */
 import { Command, CommanderError, Option } from 'commander';
-import { resolve, join } from 'node:path';
+import { resolve, join, dirname } from 'node:path';
 import { SingleBar, Presets } from 'cli-progress';
-import { loadScenarioFile, type LoadedScenario } from '../input/scenario/load.ts';
+import { loadScenarioFile, readScenarioFile, validateModelInputs, type ScenarioOverride } from '../input/scenario/load.ts';
 import { ScenarioError } from '../input/scenario/errors.ts';
 import { scenarioJsonSchema } from '../input/scenario/schema.ts';
 import { SimulationError } from '../model/simulate.ts';
@@ -18,9 +18,7 @@ import { table } from '../output/console.ts';
 import { resultSheet, comparisonSheet } from '../output/console.ts';
 import { compareBuildUps, comparisonCsv } from '../analysis/compare.ts';
 import { writeArtefactsAtomically } from '../output/write.ts';
-import { parseClockTime } from '../input/scenario/units.ts';
 import { runScenario, writeRun, VERSION } from '../index.ts';
-import type { ModelInputs } from '../model/inputs.ts';
 
 export const EXIT_OK = 0;
 export const EXIT_BAD_INPUT = 2;
@@ -54,33 +52,29 @@ function parseHeights(text: string): number[] {
   return values;
 }
 
-/** Apply command-line overrides to the validated inputs. */
-function withOverrides(loaded: LoadedScenario, opts: RunOptions, mode: 'cycle' | 'warmup' | null): LoadedScenario {
-  let run = loaded.inputs.run;
-  if (opts.integrator) run = { ...run, integrator: opts.integrator };
-  if (opts.days !== undefined) {
-    const d = Number(opts.days);
-    if (!Number.isInteger(d) || d < 1 || d > 366) throw new BadInput(`--days: found "${opts.days}"; expected a whole number of days from 1 to 366`);
-    run = { ...run, length: { kind: 'days', days: d } };
-  }
+/**
+ * The command-line options that set scenario values, as overrides for the one validation path (so
+ * every rule, such as the weather file covering the run, applies after them).
+ */
+function overridesFrom(raw: unknown, opts: RunOptions, mode: 'cycle' | 'warmup' | null): ScenarioOverride[] {
+  const overrides: ScenarioOverride[] = [];
+  if (opts.integrator) overrides.push({ path: ['run', 'integrator'], value: opts.integrator, option: '--integrator' });
+  if (opts.days !== undefined) overrides.push({ path: ['run', 'days'], value: /^\s*\d+\s*$/.test(opts.days) ? Number(opts.days) : opts.days, option: '--days' });
   if (mode === 'warmup') {
-    let start = run.firingStartClockS;
-    if (opts.firingStart !== undefined) {
-      const s = parseClockTime(opts.firingStart);
-      if (s === null) throw new BadInput(`--firing-start: found "${opts.firingStart}"; expected a local clock time "HH:MM"`);
-      start = s;
-    }
-    if (start === undefined) throw new BadInput('run.firing_start: missing; expected the local clock time "HH:MM" at which firing starts (or give --firing-start HH:MM)');
-    run = { ...run, mode: 'warmup', initial: 'cold', firingStartClockS: start, length: run.length.kind === 'days' ? run.length : { kind: 'days', days: 1 } };
+    overrides.push({ path: ['run', 'mode'], value: 'warmup', option: 'warmup' });
+    if (opts.firingStart !== undefined) overrides.push({ path: ['run', 'firing_start'], value: opts.firingStart, option: '--firing-start' });
+    // a warm-up study of a file written for periodic cycling runs one day unless --days says otherwise
+    const days = (raw as { run?: { days?: unknown } } | null)?.run?.days;
+    if (opts.days === undefined && (days === undefined || days === 'until-periodic')) overrides.push({ path: ['run', 'days'], value: 1, option: 'warmup' });
   }
-  const inputs: ModelInputs = { ...loaded.inputs, run };
-  return { ...loaded, inputs };
+  return overrides;
 }
 
 async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmup' | null): Promise<number> {
   const chartSize = parseChartSize(opts.chartSize);
   const chartHeights = opts.chartHeights === undefined ? undefined : parseHeights(opts.chartHeights);
-  const loaded = withOverrides(loadScenarioFile(file), opts, mode);
+  const raw = readScenarioFile(file);
+  const loaded = validateModelInputs(raw, { baseDir: dirname(resolve(file)), file, overrides: overridesFrom(raw, opts, mode) });
   const outDir = resolve(opts.out ?? join('out', loaded.inputs.name));
   const showProgress = !opts.quiet && process.stderr.isTTY;
   const bar = showProgress ? new SingleBar({ format: 'simulating |{bar}| {percentage}% ', stream: process.stderr, hideCursor: true }, Presets.shades_classic) : null;

@@ -9,7 +9,7 @@ import type { WeatherSource } from '../physics/outside/weather.ts';
 import type { FiringSchedule } from './firing.ts';
 import { solarAt, absorbedSunPerMetre } from '../physics/sun/irradiance.ts';
 import { SECONDS_PER_DAY } from '../physics/constants.ts';
-import { skyTemperatureSwinbank, skyEmissivityBerdahlMartin, skyEmissivityCloudCorrection, skyTemperatureFromEmissivity } from '../physics/correlations/radiation.ts';
+import { surroundingTemperatures } from '../physics/outside/boundary.ts';
 
 export interface Drivers {
   t: number;
@@ -56,21 +56,7 @@ export function evaluateDrivers(ctx: DriverContext, tRun: number, out: Drivers):
   out.windSpeedRef = air.windSpeed;
   out.cloudCover = air.cloudCover;
 
-  const rad = inputs.outside.radiation;
-  if (rad.kind === 'sky-ground') {
-    if (rad.sky === 'swinbank') out.skyTemperatureK = skyTemperatureSwinbank(air.airTemperatureK);
-    else {
-      const eps = skyEmissivityCloudCorrection(skyEmissivityBerdahlMartin(air.dewPointK), air.cloudCover);
-      out.skyTemperatureK = skyTemperatureFromEmissivity(Math.min(1, eps), air.airTemperatureK);
-    }
-    out.groundTemperatureK = rad.groundTemperatureK ?? air.airTemperatureK;
-  } else if (rad.kind === 'surroundings') {
-    out.skyTemperatureK = rad.temperatureK;
-    out.groundTemperatureK = rad.temperatureK;
-  } else {
-    out.skyTemperatureK = air.airTemperatureK;
-    out.groundTemperatureK = air.airTemperatureK;
-  }
+  surroundingTemperatures(inputs.outside.radiation, air, out);
 
   const sun = solarAt(utcMs, inputs.site, air);
   out.sunAltitudeDeg = sun.altitudeDeg;

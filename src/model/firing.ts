@@ -14,7 +14,7 @@
  * - `daily`: the same points every day. `perDay`: a list of day-schedules used in turn; day i uses
  *   perDay[i mod n] (e.g. seven entries for a weekly cycle).
  * - Off state: a burner that is off still lets a small natural-draft flow through the flue. Any
- *   scheduled mass flow below the floor `minimumMassFlow` is raised to the floor. Default floor: 2 %
+ *   scheduled mass flow below the floor `offMassFlow` is raised to the floor. Default floor: 2 %
  *   of the largest scheduled flow (common practice: a few per cent of full-load flow passes through
  *   a stack with the burner off and its damper open). The inlet temperature in an off period is the
  *   one written at the off points (e.g. the boiler-house temperature, or the standby temperature of
@@ -34,12 +34,13 @@ export interface FiringPoint {
 
 interface FiringOptions {
   /** Floor on the mass flow (natural draft with the burner off), kg/s. Default 2 % of the largest scheduled flow. */
-  readonly minimumMassFlow?: number;
+  readonly offMassFlow?: number;
 }
 
-export type FiringScheduleSpec =
-  | (FiringOptions & { readonly daily: readonly FiringPoint[]; readonly perDay?: undefined })
-  | (FiringOptions & { readonly perDay: readonly (readonly FiringPoint[])[]; readonly daily?: undefined });
+/** Firing points for every day (`daily`) or in turn per day (`perDay`). */
+export type DaySchedules = { readonly daily: readonly FiringPoint[] } | { readonly perDay: readonly (readonly FiringPoint[])[] };
+
+export type FiringScheduleSpec = FiringOptions & DaySchedules;
 
 /** Inlet conditions at one instant. */
 export interface FiringState {
@@ -59,7 +60,7 @@ export interface FiringSchedule {
    */
   corners(dayIndex: number): number[];
   /** The flow floor in use, kg/s. */
-  readonly minimumMassFlow: number;
+  readonly offMassFlow: number;
 }
 
 /** Default floor as a fraction of the largest scheduled flow (common practice; see module note). */
@@ -71,8 +72,8 @@ const LOWEST_PLAUSIBLE_INLET_K = 200;
 const HIGHEST_PLAUSIBLE_INLET_K = 3000;
 
 function daysOf(spec: FiringScheduleSpec): { label: (d: number) => string; days: readonly (readonly FiringPoint[])[] } {
-  if (spec.daily !== undefined) return { label: () => 'daily', days: [spec.daily] };
-  return { label: (d) => `perDay[${d}]`, days: spec.perDay ?? [] };
+  if ('daily' in spec && spec.daily !== undefined) return { label: () => 'daily', days: [spec.daily] };
+  return { label: (d) => `perDay[${d}]`, days: ('perDay' in spec ? spec.perDay : undefined) ?? [] };
 }
 
 /**
@@ -113,11 +114,11 @@ export function validateFiringSchedule(spec: FiringScheduleSpec): string[] {
       }
     });
   });
-  if (spec.minimumMassFlow !== undefined) {
-    if (!Number.isFinite(spec.minimumMassFlow) || spec.minimumMassFlow < 0) out.push(`minimumMassFlow ${spec.minimumMassFlow} kg/s must be ≥ 0`);
-    else if (spec.minimumMassFlow === 0 && largest === 0) out.push('every scheduled flow is 0 and minimumMassFlow is 0: the gas balance needs some flow');
+  if (spec.offMassFlow !== undefined) {
+    if (!Number.isFinite(spec.offMassFlow) || spec.offMassFlow < 0) out.push(`offMassFlow ${spec.offMassFlow} kg/s must be ≥ 0`);
+    else if (spec.offMassFlow === 0 && largest === 0) out.push('every scheduled flow is 0 and offMassFlow is 0: the gas balance needs some flow');
   } else if (largest === 0 && out.length === 0) {
-    out.push('every scheduled flow is 0: give minimumMassFlow (the natural-draft flow with the burner off)');
+    out.push('every scheduled flow is 0: give offMassFlow (the natural-draft flow with the burner off)');
   }
   return out;
 }
@@ -149,7 +150,7 @@ export function makeFiringSchedule(spec: FiringScheduleSpec): FiringSchedule {
   if (problems.length) throw new RangeError(`firing schedule: ${problems.join('; ')}`);
   const { days } = daysOf(spec);
   const largest = Math.max(...days.flatMap((pts) => pts.map((p) => p.massFlow)));
-  const floor = spec.minimumMassFlow ?? DEFAULT_OFF_FLOW_FRACTION * largest;
+  const floor = spec.offMassFlow ?? DEFAULT_OFF_FLOW_FRACTION * largest;
   const dayPoints = (dayIndex: number) => days[((Math.floor(dayIndex) % days.length) + days.length) % days.length];
 
   const cornerCache = days.map((points) => {
@@ -166,7 +167,7 @@ export function makeFiringSchedule(spec: FiringScheduleSpec): FiringSchedule {
   });
 
   return {
-    minimumMassFlow: floor,
+    offMassFlow: floor,
     at(dayIndex, clockS) {
       const v = interpolate(dayPoints(dayIndex), clockS);
       return {

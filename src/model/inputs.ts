@@ -5,6 +5,8 @@
  */
 import type { WallLayer } from '../physics/wall/mesh.ts';
 import type { WeatherSource } from '../physics/outside/weather.ts';
+import type { OutsideRadiation } from '../physics/outside/boundary.ts';
+import type { DaySchedules, FiringPoint } from './firing.ts';
 
 export interface SiteInput {
   readonly name: string;
@@ -39,13 +41,15 @@ export interface OutsideInput {
   /** Fixed outside film coefficient, W/(m² K); undefined = correlations (Churchill–Bernstein / Churchill–Chu, mixed). */
   readonly filmCoefficient?: number;
   /** Radiation exchange: to half sky and half ground, or to surroundings at a fixed temperature, or none. */
-  readonly radiation: { readonly kind: 'sky-ground'; readonly sky: 'swinbank' | 'berdahl-martin'; readonly groundTemperatureK?: number }
-    | { readonly kind: 'surroundings'; readonly temperatureK: number }
-    | { readonly kind: 'none' };
+  readonly radiation: OutsideRadiation;
   /** Whether absorbed sun is applied. */
   readonly sun: boolean;
 }
 
+/**
+ * The weather the run sees: a source that answers the outside-air state at any instant (parsed or
+ * built once, when the inputs are validated), and what it is, for reports.
+ */
 export type WeatherInput =
   | {
       readonly kind: 'design-day';
@@ -57,18 +61,14 @@ export type WeatherInput =
       readonly referenceHeightM: number;
       readonly cloudCover: number;
       readonly dewPointK: number;
+      readonly source: WeatherSource;
     }
-  | { readonly kind: 'file'; readonly fileName: string; readonly text: string; readonly referenceHeightM: number }
+  | { readonly kind: 'file'; readonly fileName: string; readonly referenceHeightM: number; readonly source: WeatherSource }
   /** Any weather source built in code (library use, tests). */
   | { readonly kind: 'source'; readonly source: WeatherSource };
 
-export interface FiringPointInput {
-  /** Local clock time, s after midnight. */
-  readonly clockS: number;
-  readonly inletTemperatureK: number;
-  /** kg/s. */
-  readonly massFlow: number;
-}
+/** One firing point: local clock time (s after midnight), inlet gas temperature (K), mass flow (kg/s). */
+export type FiringPointInput = FiringPoint;
 
 export interface GasCompositionInput {
   /** Mole (volume) fractions of the wet flue gas, summing to 1. */
@@ -82,7 +82,7 @@ export interface GasCompositionInput {
 
 export interface FlueInput {
   /** Firing points for every day (`daily`) or in turn per day (`perDay`). */
-  readonly schedule: { readonly daily: readonly FiringPointInput[] } | { readonly perDay: readonly (readonly FiringPointInput[])[] };
+  readonly schedule: DaySchedules;
   /** Mass flow floor while off (natural draft), kg/s. */
   readonly offMassFlow?: number;
   readonly composition: GasCompositionInput;

@@ -1,23 +1,25 @@
 /**
  * The semi-discrete wall model of the whole stack as an ODE system C(T) dT/dt = f(t, T)
- * (design.md sections 2–4), in the form the integrators take: dT/dt = f / C.
+ * (docs/model.md), in the form the integrators take: dT/dt = f / C.
  *
- * Unknowns: node temperatures, segment by segment from the bottom (index s·n + i). Flue side: the
- * gas marches up quasi-steadily, each segment taking heat ṁ c_p (T_in − T_out) with
- * T_out = T_w + (T_in − T_w) exp(−h π D Δz / (ṁ c_p)). Outside: convection, radiation to sky and
- * ground, absorbed sun. Quadrature channels (W, whole stack): heat from the gas into the wall,
- * outside convection, outside radiation, absorbed sun.
+ * Unknowns: node temperatures, segment by segment from the bottom (index s·n + i). The model only
+ * composes: radial conduction through the mesh, the flue side of each segment
+ * (physics/flue/inside.ts: the gas marching up, heat into the inner surface) and the outer boundary
+ * of each segment (physics/outside/boundary.ts: convection, radiation, sun). Quadrature channels
+ * (W, whole stack): heat from the gas into the wall, outside convection, outside radiation, absorbed
+ * sun.
  */
 import type { OdeSystem } from '../solver/types.ts';
 import type { ModelInputs } from './inputs.ts';
+import { REPORTED_BOUNDARY_CHANNELS } from './timeseries.ts';
 import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../physics/wall/mesh.ts';
 import { gapConductancePerMetre } from '../physics/wall/gap.ts';
 import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
-import { airPropertiesAt, airPropertiesInto } from '../physics/properties/air.ts';
-import { outsideFilmCoefficient } from '../physics/correlations/external.ts';
-import { nuPipeBlended } from '../physics/correlations/internal.ts';
-import { radiationToSkyAndGround, radiationCoefficientToSkyAndGround } from '../physics/correlations/radiation.ts';
+import { airPropertiesAt } from '../physics/properties/air.ts';
 import type { GasPropertyLookup } from '../physics/properties/flueGas.ts';
+import { flueSideOfSegment, emptyFlueSide, type FlueSideSpec } from '../physics/flue/inside.ts';
+import { outerBoundaryOfSegment, emptyOuterBoundary, type OuterSurfaceSpec, type OuterBoundaryOfSegment } from '../physics/outside/boundary.ts';
+import { gapConvectionRatio, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
 
 export const AUX_GAS_TO_WALL = 0;
 export const AUX_CONVECTION = 1;
@@ -25,43 +27,30 @@ export const AUX_RADIATION = 2;
 export const AUX_SUN = 3;
 export const AUX_SIZE = 4;
 
-/** Per-segment quantities at one instant (W per metre of height, K, W/(m² K), m/s). */
-export interface SegmentDiagnostics {
-  gasInK: Float64Array;
-  gasOutK: Float64Array;
-  insideFilm: Float64Array;
-  gasToWallPerMetre: Float64Array;
-  windAtHeight: Float64Array;
-  outsideFilm: Float64Array;
-  convectionPerMetre: Float64Array;
-  radiationPerMetre: Float64Array;
-  sunPerMetre: Float64Array;
-  reynoldsInside: Float64Array;
-  prandtlInside: Float64Array;
-  /** Outside Reynolds number on the outer diameter, Rayleigh number on the height, film Prandtl number (NaN with a fixed film coefficient). */
-  reynoldsOutside: Float64Array;
-  rayleighOutside: Float64Array;
-  prandtlOutside: Float64Array;
-}
+/** The per-segment quantities of one instant that reports and range checks need (W per metre of height, K, W/(m² K), m/s). */
+export const SEGMENT_CHANNELS = [
+  ...REPORTED_BOUNDARY_CHANNELS,
+  'reynoldsInside',
+  'prandtlInside',
+  /** Outside Reynolds number on the outer diameter (NaN with a fixed film coefficient). */
+  'reynoldsOutside',
+  /** Outside Rayleigh number on the height (NaN with a fixed film coefficient). */
+  'rayleighOutside',
+  /** Outside Grashof number on the height (NaN with a fixed film coefficient). */
+  'grashofOutside',
+  /** Film Prandtl number outside (NaN with a fixed film coefficient). */
+  'prandtlOutside',
+  /** 1 where the slender-cylinder factor was applied outside, else 0. */
+  'slenderOutside',
+] as const;
+
+export type SegmentChannel = (typeof SEGMENT_CHANNELS)[number];
+
+/** One Float64Array (one value per segment) per channel. */
+export type SegmentDiagnostics = Record<SegmentChannel, Float64Array>;
 
 export function makeSegmentDiagnostics(segments: number): SegmentDiagnostics {
-  const f = () => new Float64Array(segments);
-  return {
-    gasInK: f(),
-    gasOutK: f(),
-    insideFilm: f(),
-    gasToWallPerMetre: f(),
-    windAtHeight: f(),
-    outsideFilm: f(),
-    convectionPerMetre: f(),
-    radiationPerMetre: f(),
-    sunPerMetre: f(),
-    reynoldsInside: f(),
-    prandtlInside: f(),
-    reynoldsOutside: f(),
-    rayleighOutside: f(),
-    prandtlOutside: f(),
-  };
+  return Object.fromEntries(SEGMENT_CHANNELS.map((c) => [c, new Float64Array(segments)])) as SegmentDiagnostics;
 }
 
 export interface StackGeometry {
@@ -89,7 +78,12 @@ export class StackWallSystem implements OdeSystem {
   private readonly convectionOut: Float64Array;
   private readonly radiationOut: Float64Array;
   private readonly sunIn: Float64Array;
+  private readonly flueSpec: FlueSideSpec;
+  private readonly surfaceSpec: OuterSurfaceSpec;
+  private readonly flue = emptyFlueSide();
+  private readonly outer: OuterBoundaryOfSegment = emptyOuterBoundary();
   private readonly film = airPropertiesAt(300);
+  private readonly outside = { airTemperatureK: 0, windSpeed: 0, skyTemperatureK: 0, groundTemperatureK: 0, sunPerMetre: 0 };
   /** Instant and state fingerprint at which `innerSink`/`outerSink` were last computed (reused by `jacobian`). */
   private sinksT = Number.NaN;
   private sinksFingerprint = Number.NaN;
@@ -111,6 +105,21 @@ export class StackWallSystem implements OdeSystem {
     this.convectionOut = new Float64Array(geometry.segments);
     this.radiationOut = new Float64Array(geometry.segments);
     this.sunIn = new Float64Array(geometry.segments);
+    this.flueSpec = {
+      innerDiameter: geometry.innerDiameter,
+      segmentLength: geometry.segmentLength,
+      filmCoefficient: inputs.flue.filmCoefficient,
+      gasCooling: inputs.flue.gasCooling,
+      nusselt: insideTubeNusselt,
+    };
+    this.surfaceSpec = {
+      outerDiameter: geometry.outerDiameter,
+      height: inputs.stack.height,
+      emissivity: inputs.surface.emissivity,
+      filmCoefficient: inputs.outside.filmCoefficient,
+      radiation: inputs.outside.radiation,
+      filmCorrelations: outsideFilmCorrelations,
+    };
   }
 
   /** Conductances per metre of height of the links of the segment whose nodes start at offset o. */
@@ -125,7 +134,7 @@ export class StackWallSystem implements OdeSystem {
           ? mesh.linkGeometry[i]! * mesh.linkConductivity[i]!(0.5 * (ta + tb))
           : kind === LINK_CONTACT
             ? mesh.linkGeometry[i]!
-            : gapConductancePerMetre(mesh.linkGap[i]!, ta, tb);
+            : gapConductancePerMetre(mesh.linkGap[i]!, ta, tb, gapConvectionRatio);
     }
   }
 
@@ -180,91 +189,46 @@ export class StackWallSystem implements OdeSystem {
    */
   boundaries(t: number, y: Float64Array, diag: SegmentDiagnostics | null): void {
     const d = this.driversAt(t);
-    const { geometry, inputs } = this;
+    const { geometry, flue, outer, outside } = this;
     const n = this.n;
-    const dz = geometry.segmentLength;
-    const di = geometry.innerDiameter;
-    const dOut = geometry.outerDiameter;
-    const perimeter = Math.PI * dOut;
-    const flue = inputs.flue;
-    const outside = inputs.outside;
-    const eps = inputs.surface.emissivity;
-    const massFlow = d.massFlow;
+    outside.airTemperatureK = d.airTemperatureK;
+    outside.skyTemperatureK = d.skyTemperatureK;
+    outside.groundTemperatureK = d.groundTemperatureK;
+    outside.sunPerMetre = d.sunPerMetre;
     let gasIn = d.inletTemperatureK;
 
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;
-      // --- flue side ---
-      const tw = y[o]!;
-      const props = this.gas(gasIn);
-      const reynolds = (4 * massFlow) / (Math.PI * di * props.dynamicViscosity);
-      const hIn = flue.filmCoefficient ?? (nuPipeBlended(reynolds, props.prandtl) * props.conductivity) / di;
-      let qIn: number;
-      let gasOut: number;
-      if (flue.gasCooling) {
-        const capacityRate = massFlow * props.specificHeat;
-        const ntu = (hIn * Math.PI * di * dz) / capacityRate;
-        const effectiveness = -Math.expm1(-ntu);
-        gasOut = gasIn - (gasIn - tw) * effectiveness;
-        qIn = (capacityRate * (gasIn - gasOut)) / dz;
-        this.innerSink[s] = (capacityRate * effectiveness) / dz;
-      } else {
-        gasOut = gasIn;
-        qIn = hIn * Math.PI * di * (gasIn - tw);
-        this.innerSink[s] = hIn * Math.PI * di;
-      }
-      this.flueToWall[s] = qIn;
+      flueSideOfSegment(this.flueSpec, gasIn, y[o]!, d.massFlow, this.gas(gasIn), flue);
+      this.flueToWall[s] = flue.heatPerMetre;
+      this.innerSink[s] = flue.sinkPerMetre;
 
-      // --- outside ---
-      const ts = y[o + n - 1]!;
-      const wind = d.windSpeedRef * geometry.windFactor[s]!;
-      let hOut: number;
-      let reOut = Number.NaN;
-      let raOut = Number.NaN;
-      if (outside.filmCoefficient !== undefined) hOut = outside.filmCoefficient;
-      else {
-        const air = airPropertiesInto(this.film, 0.5 * (ts + d.airTemperatureK));
-        const film = outsideFilmCoefficient(
-          { windSpeed: wind, outerDiameter: dOut, height: inputs.stack.height, surfaceTemperatureK: ts, airTemperatureK: d.airTemperatureK },
-          air,
-        );
-        hOut = film.h;
-        reOut = film.re;
-        raOut = film.ra;
-      }
-      const qc = hOut * perimeter * (ts - d.airTemperatureK);
-      let qr = 0;
-      let hr = 0;
-      if (outside.radiation.kind === 'sky-ground') {
-        qr = radiationToSkyAndGround(ts, eps, d.skyTemperatureK, d.groundTemperatureK) * perimeter;
-        hr = radiationCoefficientToSkyAndGround(ts, eps) * perimeter;
-      } else if (outside.radiation.kind === 'surroundings') {
-        // surroundings at one temperature: sky and ground both at it
-        qr = radiationToSkyAndGround(ts, eps, d.skyTemperatureK, d.skyTemperatureK) * perimeter;
-        hr = radiationCoefficientToSkyAndGround(ts, eps) * perimeter;
-      }
-      this.convectionOut[s] = qc;
-      this.radiationOut[s] = qr;
-      this.sunIn[s] = d.sunPerMetre;
-      this.outerSink[s] = hOut * perimeter + hr;
+      outside.windSpeed = d.windSpeedRef * geometry.windFactor[s]!;
+      outerBoundaryOfSegment(this.surfaceSpec, y[o + n - 1]!, outside, this.film, outer);
+      this.convectionOut[s] = outer.convectionPerMetre;
+      this.radiationOut[s] = outer.radiationPerMetre;
+      this.sunIn[s] = outer.sunPerMetre;
+      this.outerSink[s] = outer.sinkPerMetre;
 
       if (diag) {
         diag.gasInK[s] = gasIn;
-        diag.gasOutK[s] = gasOut;
-        diag.insideFilm[s] = hIn;
-        diag.gasToWallPerMetre[s] = qIn;
-        diag.windAtHeight[s] = wind;
-        diag.outsideFilm[s] = hOut;
-        diag.convectionPerMetre[s] = qc;
-        diag.radiationPerMetre[s] = qr;
-        diag.sunPerMetre[s] = d.sunPerMetre;
-        diag.reynoldsInside[s] = reynolds;
-        diag.prandtlInside[s] = props.prandtl;
-        diag.reynoldsOutside[s] = reOut;
-        diag.rayleighOutside[s] = raOut;
-        diag.prandtlOutside[s] = outside.filmCoefficient === undefined ? this.film.prandtl : Number.NaN;
+        diag.gasOutK[s] = flue.gasOutK;
+        diag.insideFilm[s] = flue.filmCoefficient;
+        diag.gasToWallPerMetre[s] = flue.heatPerMetre;
+        diag.windAtHeight[s] = outside.windSpeed;
+        diag.outsideFilm[s] = outer.filmCoefficient;
+        diag.convectionPerMetre[s] = outer.convectionPerMetre;
+        diag.radiationPerMetre[s] = outer.radiationPerMetre;
+        diag.sunPerMetre[s] = outer.sunPerMetre;
+        diag.reynoldsInside[s] = flue.reynolds;
+        diag.prandtlInside[s] = flue.prandtl;
+        diag.reynoldsOutside[s] = outer.reynolds;
+        diag.rayleighOutside[s] = outer.rayleigh;
+        diag.grashofOutside[s] = outer.grashof;
+        diag.prandtlOutside[s] = outer.prandtl;
+        diag.slenderOutside[s] = outer.slenderCorrected ? 1 : 0;
       }
-      gasIn = gasOut;
+      gasIn = flue.gasOutK;
     }
     this.sinksT = t;
     this.sinksFingerprint = fingerprint(y);

@@ -3,6 +3,48 @@
  * Arrays are flat: temperature[(k · segments + s) · nodes + i] for output instant k, segment s,
  * node i; per-segment channels [k · segments + s]; per-instant channels [k].
  */
+/** The boundary quantities of each segment that a time series reports (W per metre of height, K, W/(m² K), m/s). */
+export const REPORTED_BOUNDARY_CHANNELS = [
+  'gasInK',
+  'gasOutK',
+  'insideFilm',
+  'gasToWallPerMetre',
+  'windAtHeight',
+  'outsideFilm',
+  'convectionPerMetre',
+  'radiationPerMetre',
+  'sunPerMetre',
+] as const;
+
+/** Per-segment channels of a time series: the reported boundary quantities and the dew-point margins. */
+export const SERIES_SEGMENT_CHANNELS = [
+  ...REPORTED_BOUNDARY_CHANNELS,
+  /** Inner surface minus the water dew point, K. */
+  'waterDewMarginK',
+  /** Inner surface minus the acid dew point, K (NaN without SO₃). */
+  'acidDewMarginK',
+] as const;
+export type SeriesSegmentChannel = (typeof SERIES_SEGMENT_CHANNELS)[number];
+
+/** Per-instant channels of a time series (besides `firing`). */
+export const SERIES_INSTANT_CHANNELS = [
+  'airTemperatureK',
+  /** Wind speed at the weather's reference height, m/s. */
+  'windSpeedRef',
+  'skyTemperatureK',
+  'sunAltitudeDeg',
+  'sunAzimuthDeg',
+  'beamNormal',
+  'diffuseHorizontal',
+  'inletTemperatureK',
+  'massFlow',
+  /** Gas temperature leaving the top segment, K. */
+  'gasExitK',
+  /** Theoretical natural draft, Pa. */
+  'draftPa',
+] as const;
+export type SeriesInstantChannel = (typeof SERIES_INSTANT_CHANNELS)[number];
+
 export interface TimeSeries {
   /** Run time of each output instant, s. */
   readonly t: Float64Array;
@@ -19,33 +61,10 @@ export interface TimeSeries {
   /** Labels and node ranges of the layers, inside → outside. */
   readonly layers: readonly { readonly label: string; readonly material: string; readonly kind: 'solid' | 'gap'; readonly firstNode: number; readonly lastNode: number; readonly thickness: number }[];
   readonly temperatureK: Float64Array;
-  readonly segment: {
-    readonly gasInK: Float64Array;
-    readonly gasOutK: Float64Array;
-    readonly insideFilm: Float64Array;
-    readonly gasToWallPerMetre: Float64Array;
-    readonly windAtHeight: Float64Array;
-    readonly outsideFilm: Float64Array;
-    readonly convectionPerMetre: Float64Array;
-    readonly radiationPerMetre: Float64Array;
-    readonly sunPerMetre: Float64Array;
-    readonly waterDewMarginK: Float64Array;
-    readonly acidDewMarginK: Float64Array;
-  };
-  readonly instant: {
-    readonly airTemperatureK: Float64Array;
-    readonly windSpeedRef: Float64Array;
-    readonly skyTemperatureK: Float64Array;
-    readonly sunAltitudeDeg: Float64Array;
-    readonly sunAzimuthDeg: Float64Array;
-    readonly beamNormal: Float64Array;
-    readonly diffuseHorizontal: Float64Array;
-    readonly inletTemperatureK: Float64Array;
-    readonly massFlow: Float64Array;
-    readonly firing: Uint8Array;
-    readonly gasExitK: Float64Array;
-    readonly draftPa: Float64Array;
-  };
+  /** Per-segment channels, [k · segments + s]. */
+  readonly segment: Readonly<Record<SeriesSegmentChannel, Float64Array>>;
+  /** Per-instant channels, [k]; `firing` is 1 while the burner fires. */
+  readonly instant: Readonly<Record<SeriesInstantChannel, Float64Array>> & { readonly firing: Uint8Array };
   readonly waterDewPointK: number;
   /** Null when the gas carries no SO₃. */
   readonly acidDewPointK: number | null;

@@ -223,3 +223,14 @@ describe('weather files through the command', () => {
     await expectBadInput(['run', file], /weather\.file: /);
   });
 });
+
+describe('command-line overrides go through the one validation path', () => {
+  it('--days past the end of the weather file is bad input (exit 2) naming the option, not an unexpected error', async () => {
+    // kiln-warmup.yaml's weather file covers a few days of January; 5 days from firing start run past it
+    await expectBadInput(['run', 'scenarios/kiln-warmup.yaml', '--days', '5'], /weather\.file: .*covers .* but the run needs/);
+  });
+
+  it('--days that is not a whole number names the option, the key and the range', async () => {
+    await expectBadInput(['run', scenarioFile('days-bad'), '--days', 'forever'], /--days \(run\.days\): found "forever"/);
+  });
+});

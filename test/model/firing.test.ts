@@ -30,7 +30,7 @@ describe('makeFiringSchedule', () => {
 
   it('raises an off flow to the default floor of 2 % of the largest flow', () => {
     // Module convention (common practice): floor = 0.02 × 10 kg/s = 0.2 kg/s.
-    expect(s.minimumMassFlow).toBeCloseTo(0.2, 15);
+    expect(s.offMassFlow).toBeCloseTo(0.2, 15);
     expect(s.at(0, h(3))).toEqual({ inletTemperatureK: 300, massFlow: 0.2, firing: false });
     // 06:00 + 0.02 h: the ramp reaches the floor exactly there
     expect(s.at(0, h(6.01)).firing).toBe(false);
@@ -48,7 +48,7 @@ describe('makeFiringSchedule', () => {
   });
 
   it('uses a user floor when given', () => {
-    const f = makeFiringSchedule({ daily: day, minimumMassFlow: 0.5 });
+    const f = makeFiringSchedule({ daily: day, offMassFlow: 0.5 });
     expect(f.at(0, 0).massFlow).toBe(0.5);
   });
 
@@ -103,8 +103,8 @@ describe('validateFiringSchedule', () => {
     ['an absurdly hot inlet', ok([p(0, 5000)]), /daily\[0\]: inletTemperatureK 5000 K is above 3000 K/],
     ['an empty day', { perDay: [[p(0)], []] }, /perDay\[1\]: needs at least one point/],
     ['a bad point on a later day', { perDay: [[p(0)], [p(0), p(100, 500, -2)]] }, /perDay\[1\]\[1\]: massFlow -2/],
-    ['no flow at all and no floor', ok([p(0, 300, 0)]), /every scheduled flow is 0: give minimumMassFlow/],
-    ['a negative floor', { daily: [p(0)], minimumMassFlow: -1 }, /minimumMassFlow -1/],
+    ['no flow at all and no floor', ok([p(0, 300, 0)]), /every scheduled flow is 0: give offMassFlow/],
+    ['a negative floor', { daily: [p(0)], offMassFlow: -1 }, /offMassFlow -1/],
     ['both daily and perDay', { daily: [p(0)], perDay: [[p(0)]] } as unknown as FiringScheduleSpec, /either daily or perDay, not both/],
     ['neither daily nor perDay', {} as FiringScheduleSpec, /give daily/],
   ];

@@ -1,36 +1,17 @@
 /**
- * Scenario in: read a YAML or JSON file, validate it, and convert it to the model's inputs (SI,
- * kelvin). Every problem is collected and reported together, one line each, as a ScenarioError.
+ * Scenario files in: read a YAML or JSON file into a plain object and hand it to the one
+ * validation path (validate.ts), with the overrides a caller applies (command-line options).
  */
 import { readFileSync } from 'node:fs';
 import { dirname, resolve, extname } from 'node:path';
 import { parseDocument } from 'yaml';
-import { scenarioSchema, type Scenario, type ScenarioMaterial } from './schema.ts';
-import { ScenarioError, formatIssues } from './errors.ts';
-import type { ModelInputs, LayerInput, WeatherInput, FiringPointInput, GasCompositionInput } from '../../model/inputs.ts';
-import type { Material, PropertyTable } from '../../physics/materials/types.ts';
-import { findMaterial } from '../../physics/materials/index.ts';
-import { validateTable } from '../../physics/properties/table.ts';
-import { airPressureAtElevation } from '../../physics/properties/air.ts';
-import { KELVIN_OFFSET, SECONDS_PER_DAY, MOLAR_MASS_AIR } from '../../physics/constants.ts';
-import { makeSiteClock } from '../../model/clock.ts';
-import { TERRAIN_EXPONENTS } from '../../physics/outside/wind.ts';
-import { parseWeatherCsv, WeatherFileError } from '../weather/csvFile.ts';
-import { fuelByName, validateUltimateAnalysis } from '../../physics/flue/fuels.ts';
-import { flueGasFromFuel, flueGasFromVolumeFractions, molarMass } from '../../physics/flue/combustion.ts';
-import { validateFiringSchedule, massFlowFromNormalVolumeFlow, type FiringScheduleSpec } from '../../model/firing.ts';
+import { ScenarioError } from './errors.ts';
+import { validateModelInputs, type LoadedScenario, type ScenarioOverride } from './validate.ts';
 
-export interface LoadedScenario {
-  /** The validated scenario, as written (SI values). */
-  readonly scenario: Scenario;
-  /** What the model runs. */
-  readonly inputs: ModelInputs;
-  /** Absolute path of the file, when read from a file. */
-  readonly path?: string;
-}
+export { validateModelInputs, validateScenario, type LoadedScenario, type ScenarioOverride } from './validate.ts';
 
-/** Read and validate a scenario file. Throws ScenarioError (bad input) with every problem. */
-export function loadScenarioFile(path: string): LoadedScenario {
+/** The plain object a scenario file holds (not yet validated). Throws ScenarioError when it cannot be read or parsed. */
+export function readScenarioFile(path: string): unknown {
   let text: string;
   try {
     text = readFileSync(path, 'utf8');
@@ -39,231 +20,23 @@ export function loadScenarioFile(path: string): LoadedScenario {
     const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : code === 'EACCES' ? 'permission denied' : (e as Error).message;
     throw new ScenarioError([`scenario file "${path}" cannot be read: ${why}`]);
   }
-  let raw: unknown;
   if (extname(path).toLowerCase() === '.json') {
     try {
-      raw = JSON.parse(text);
+      return JSON.parse(text);
     } catch (e) {
       throw new ScenarioError([`not valid JSON: ${(e as Error).message}`], path);
     }
-  } else {
-    const doc = parseDocument(text, { prettyErrors: true, uniqueKeys: true });
-    if (doc.errors.length > 0) throw new ScenarioError(doc.errors.map((e) => `not valid YAML: ${e.message.split('\n')[0]}`), path);
-    raw = doc.toJS();
   }
-  return validateScenario(raw, { baseDir: dirname(resolve(path)), file: path });
+  const doc = parseDocument(text, { prettyErrors: true, uniqueKeys: true });
+  if (doc.errors.length > 0) throw new ScenarioError(doc.errors.map((e) => `not valid YAML: ${e.message.split('\n')[0]}`), path);
+  return doc.toJS();
 }
 
-/** Validate a scenario object (as parsed from YAML or JSON) and convert it to model inputs. */
-export function validateScenario(raw: unknown, options: { baseDir?: string; file?: string } = {}): LoadedScenario {
-  const parsed = scenarioSchema.safeParse(raw);
-  if (!parsed.success) throw new ScenarioError(formatIssues(parsed.error.issues, raw), options.file);
-  const problems: string[] = [];
-  const inputs = toModelInputs(parsed.data, options.baseDir ?? process.cwd(), problems);
-  if (problems.length > 0 || !inputs) throw new ScenarioError(problems, options.file);
-  return { scenario: parsed.data, inputs, path: options.file ? resolve(options.file) : undefined };
-}
-
-const c = (k: number) => `${(k - KELVIN_OFFSET).toFixed(1)} °C`;
-
-function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelInputs | null {
-  // ---- site and clock (the schema has checked the time zone) ----
-  let clock: ReturnType<typeof makeSiteClock> | null = null;
-  try {
-    clock = makeSiteClock(s.site.time_zone, s.site.first_day);
-  } catch {
-    problems.push(`site.first_day: found "${s.site.first_day}"; expected a calendar date "YYYY-MM-DD"`);
-  }
-  const windExponent = typeof s.site.terrain === 'number' ? s.site.terrain : TERRAIN_EXPONENTS[s.site.terrain];
-
-  // ---- layers ----
-  const layers: LayerInput[] = [];
-  s.stack.layers.forEach((l, j) => {
-    // a library name has been checked by the schema
-    const material = typeof l.material === 'string' ? findMaterial(l.material)! : inlineMaterial(l.material, `stack.layers[${j}].material`, problems);
-    if (!material) return;
-    if (material.kind === 'gap' && (j === 0 || j === s.stack.layers.length - 1))
-      problems.push(`stack.layers[${j}].material: found an air gap as the ${j === 0 ? 'innermost' : 'outermost'} layer; expected a gap only between two solid layers`);
-    if (l.contact_resistance > 0 && j === s.stack.layers.length - 1)
-      problems.push(`stack.layers[${j}].contact_resistance: found ${l.contact_resistance} m²·K/W on the outermost layer; expected 0 (there is no next layer)`);
-    layers.push({ label: l.label ?? material.name, material, thickness: l.thickness, cells: l.cells, contactResistanceToNext: l.contact_resistance });
-  });
-
-  // ---- weather ----
-  let weather: WeatherInput | null = null;
-  const refHeight = s.weather.wind_reference_height;
-  if (s.weather.design_day) {
-    const d = s.weather.design_day;
-    if (d.max_air_temperature < d.min_air_temperature)
-      problems.push(`weather.design_day.max_air_temperature: found ${c(d.max_air_temperature)}; expected at least the minimum, ${c(d.min_air_temperature)}`);
-    const dew = d.dew_point ?? d.min_air_temperature;
-    if (dew > d.max_air_temperature + 0.01) problems.push(`weather.design_day.dew_point: found ${c(dew)}; expected at most the maximum air temperature, ${c(d.max_air_temperature)}`);
-    weather = {
-      kind: 'design-day',
-      minAirTemperatureK: d.min_air_temperature,
-      maxAirTemperatureK: d.max_air_temperature,
-      windSpeed: d.wind_speed,
-      windDailyAmplitude: d.wind_daily_amplitude,
-      referenceHeightM: refHeight,
-      cloudCover: d.cloud_cover,
-      dewPointK: dew,
-    };
-  } else if (s.weather.file) {
-    const file = resolve(baseDir, s.weather.file);
-    let text: string | null = null;
-    try {
-      text = readFileSync(file, 'utf8');
-    } catch (e) {
-      const code = (e as NodeJS.ErrnoException).code;
-      problems.push(`weather.file: found "${s.weather.file}"; expected a readable CSV file (${code === 'ENOENT' ? 'no such file' : (e as Error).message})`);
-    }
-    if (text !== null) {
-      weather = { kind: 'file', fileName: s.weather.file, text, referenceHeightM: refHeight };
-      if (clock) {
-        try {
-          const src = parseWeatherCsv(text, clock, s.weather.file, { referenceHeightM: refHeight });
-          // a periodic study repeats the first day, so only that day must be covered
-          const days = s.run.days === 'until-periodic' ? 1 : s.run.days;
-          const startT = s.run.mode === 'warmup' && s.run.firing_start !== undefined ? clock.runTimeOfLocal(0, s.run.firing_start) : 0;
-          const cover = src.coversRange(clock.utcMs(startT), clock.utcMs(startT + days * SECONDS_PER_DAY));
-          if (!cover.covered) problems.push(`weather.file: ${cover.message}`);
-        } catch (e) {
-          if (e instanceof WeatherFileError || e instanceof RangeError) problems.push(`weather.file: ${e.message}`);
-          else throw e;
-        }
-      }
-    }
-  }
-
-  // ---- flue gas ----
-  // a library fuel name has been checked by the schema
-  let composition: GasCompositionInput | null = null;
-  const g = s.flue.gas;
-  const fuelIssues = g.fuel_analysis ? validateUltimateAnalysis(g.fuel_analysis) : [];
-  problems.push(...fuelIssues.map((i) => `flue.gas.fuel_analysis: ${i}`));
-  const fuel = g.fuel !== undefined ? fuelByName(g.fuel) : fuelIssues.length === 0 ? g.fuel_analysis : undefined;
-  if (fuel) {
-    composition = flueGasFromFuel(fuel, g.excess_air ?? 0, { sulfurToSO3: g.sulfur_to_so3, combustionAirHumidity: g.air_humidity });
-  } else if (g.composition) {
-    const k = g.composition;
-    const sum = k.N2 + k.O2 + k.CO2 + k.H2O;
-    if (Math.abs(sum - 1) > 0.02) problems.push(`flue.gas.composition: found fractions summing to ${sum.toFixed(3)}; expected N2 + O2 + CO2 + H2O = 1 (within 0.02)`);
-    else composition = flueGasFromVolumeFractions({ N2: k.N2, O2: k.O2, CO2: k.CO2, H2O: k.H2O, SO2: k.SO2_ppm * 1e-6, SO3Ppm: k.SO3_ppm });
-  }
-
-  // ---- firing schedule ----
-  // volume flows at normal conditions become mass flows with the flue gas's molar mass
-  const gasMolarMass = composition ? molarMass(composition) : MOLAR_MASS_AIR;
-  const massFlowOf = (p: { mass_flow?: number; volume_flow?: number }) => p.mass_flow ?? massFlowFromNormalVolumeFlow((p.volume_flow ?? 0) * 3600, gasMolarMass);
-  const toPoints = (pts: readonly { time: number; gas_temperature: number; mass_flow?: number; volume_flow?: number }[]): FiringPointInput[] =>
-    pts.map((p) => ({ clockS: p.time, inletTemperatureK: p.gas_temperature, massFlow: massFlowOf(p) }));
-  const schedule = s.flue.schedule.daily ? { daily: toPoints(s.flue.schedule.daily) } : { perDay: (s.flue.schedule.per_day ?? []).map(toPoints) };
-  const dayLists = s.flue.schedule.daily ? [['daily', s.flue.schedule.daily] as const] : (s.flue.schedule.per_day ?? []).map((d, i) => [`per_day[${i}]`, d] as const);
-  let largestFlow = 0;
-  for (const [where, pts] of dayLists) {
-    pts.forEach((p, i) => {
-      largestFlow = Math.max(largestFlow, massFlowOf(p));
-      if (i === 0) return;
-      const prev = pts[i - 1]!.time;
-      const hhmm = (x: number) => `${String(Math.floor(x / 3600)).padStart(2, '0')}:${String(Math.floor((x % 3600) / 60)).padStart(2, '0')}`;
-      if (p.time < prev) problems.push(`flue.schedule.${where}[${i}].time: found "${hhmm(p.time)}"; expected a time not before the previous point's "${hhmm(prev)}" (times must not go backwards)`);
-      else if (i > 1 && p.time === prev && pts[i - 2]!.time === prev)
-        problems.push(`flue.schedule.${where}[${i}].time: found "${hhmm(p.time)}" for the third point in a row; expected at most two points at one time (a step)`);
-    });
-  }
-  if (largestFlow === 0 && !(s.flue.off_mass_flow && s.flue.off_mass_flow > 0))
-    problems.push('flue.schedule: found every flow 0; expected some flow, or flue.off_mass_flow for the natural draft with the burner off');
-  if (problems.length === 0) for (const msg of validateFiringSchedule({ ...schedule, minimumMassFlow: s.flue.off_mass_flow } as FiringScheduleSpec)) problems.push(`flue.schedule: ${msg}`);
-
-  // ---- run ----
-  if (s.run.mode === 'warmup' && s.run.firing_start === undefined)
-    problems.push('run.firing_start: missing; expected the local clock time "HH:MM" at which firing starts, for a warm-up study');
-  if (s.run.output_interval > SECONDS_PER_DAY / 2) problems.push(`run.output_interval: found ${s.run.output_interval / 60} min; expected at most 12 h`);
-
-  if (problems.length > 0 || !weather || !composition) return null;
-
-  const lining = layers[0]!.material;
-  return {
-    name: s.name,
-    site: {
-      name: s.site.name,
-      latitudeDeg: s.site.latitude,
-      longitudeDeg: s.site.longitude,
-      elevationM: s.site.elevation,
-      timeZone: s.site.time_zone,
-      startDate: s.site.first_day,
-      groundReflectance: s.site.ground_reflectance,
-      windExponent,
-    },
-    stack: { height: s.stack.height, innerDiameter: s.stack.inner_diameter, segments: s.stack.segments },
-    layers,
-    surface: { emissivity: s.surface.emissivity, solarAbsorptance: s.surface.solar_absorptance },
-    outside: {
-      filmCoefficient: s.outside.film_coefficient === 'auto' ? undefined : s.outside.film_coefficient,
-      radiation:
-        s.outside.radiation === 'sky-ground'
-          ? { kind: 'sky-ground', sky: s.outside.sky, groundTemperatureK: s.outside.ground_temperature }
-          : s.outside.radiation === 'none'
-            ? { kind: 'none' }
-            : { kind: 'surroundings', temperatureK: s.outside.radiation.surroundings },
-      sun: s.outside.sun,
-    },
-    weather,
-    flue: {
-      schedule,
-      offMassFlow: s.flue.off_mass_flow,
-      composition,
-      properties: s.flue.properties,
-      filmCoefficient: s.flue.film_coefficient === 'auto' ? undefined : s.flue.film_coefficient,
-      gasCooling: s.flue.gas_cooling,
-      pressurePa: s.flue.pressure ?? airPressureAtElevation(s.site.elevation),
-    },
-    run: {
-      mode: s.run.mode,
-      length: s.run.days === 'until-periodic' ? { kind: 'until-periodic', toleranceK: s.run.periodic_tolerance, maxDays: s.run.max_days } : { kind: 'days', days: s.run.days },
-      outputInterval: s.run.output_interval,
-      initial: s.run.mode === 'warmup' ? 'cold' : s.run.initial === 'steady' ? 'steady-daily-mean' : s.run.initial,
-      integrator: s.run.integrator,
-      rtol: s.run.relative_tolerance,
-      atol: s.run.absolute_tolerance,
-      firingStartClockS: s.run.firing_start,
-    },
-    limits: {
-      shellTouchK: s.limits.shell_touch,
-      liningServiceK: s.limits.lining_service ?? (lining.kind === 'solid' ? lining.maxServiceTemperatureK : undefined),
-      allowableStressPa: s.limits.allowable_stress,
-      acidDewMarginK: s.limits.acid_dew_margin,
-      waterDewMarginK: s.limits.water_dew_margin,
-    },
-  };
-}
-
-/** An inline material from the scenario, with tables in kelvin. */
-function inlineMaterial(m: ScenarioMaterial, path: string, problems: string[]): Material | undefined {
-  const table = (v: number | [number, number][], field: string): PropertyTable | null => {
-    const t: PropertyTable = typeof v === 'number' ? { temperatureK: [300], values: [v] } : { temperatureK: v.map((p) => p[0] + KELVIN_OFFSET), values: v.map((p) => p[1]) };
-    const issues = validateTable(t, field);
-    if (issues.length > 0) {
-      problems.push(...issues.map((i) => `${path}.${field}: found ${JSON.stringify(v)}; expected [temperature °C, value] pairs with increasing temperatures and positive values (${i})`));
-      return null;
-    }
-    return t;
-  };
-  const k = table(m.conductivity, 'conductivity');
-  const cp = table(m.specific_heat, 'specific_heat');
-  if (!k || !cp) return undefined;
-  return {
-    name: m.name,
-    description: 'inline material from the scenario',
-    kind: 'solid',
-    density: m.density,
-    conductivity: k,
-    specificHeat: cp,
-    emissivity: m.emissivity,
-    maxServiceTemperatureK: m.max_service_temperature,
-    youngsModulus: m.youngs_modulus ?? 0,
-    thermalExpansion: m.thermal_expansion ?? 0,
-    poissonRatio: m.poisson_ratio ?? 0.2,
-    source: m.source,
-  };
+/**
+ * Read and validate a scenario file, with `overrides` applied before validation. Throws
+ * ScenarioError (bad input) with every problem.
+ */
+export function loadScenarioFile(path: string, overrides: readonly ScenarioOverride[] = []): LoadedScenario {
+  const raw = readScenarioFile(path);
+  return validateModelInputs(raw, { baseDir: dirname(resolve(path)), file: path, overrides });
 }

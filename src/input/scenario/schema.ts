@@ -8,6 +8,9 @@ import { parseQuantity, parseClockTime, describeExpected, QUANTITY_KINDS, type Q
 import { findMaterial, suggestMaterial } from '../../physics/materials/index.ts';
 import { FUELS } from '../../physics/flue/fuels.ts';
 import { isValidTimeZone } from '../../model/clock.ts';
+import { TERRAIN_EXPONENTS, type Terrain } from '../../physics/outside/wind.ts';
+import { SKY_MODELS, type SkyModelName } from '../../physics/outside/boundary.ts';
+import { INTEGRATORS, type IntegratorName } from '../../solver/index.ts';
 
 interface Bounds {
   /** Smallest allowed SI value (inclusive unless `exclusiveMin`). */
@@ -78,7 +81,7 @@ const site = z.strictObject({
   name: z.string().min(1).meta({ description: 'Name of the site, for reports.' }),
   latitude: ratio(-90, 90, 'degrees north', 'Latitude, degrees north (negative south)'),
   longitude: ratio(-180, 180, 'degrees east', 'Longitude, degrees east (negative west)'),
-  elevation: quantity('length', { min: -500, max: 9000, wording: 'an elevation between -500 m and 9000 m' }, 'Elevation above sea level').default(0),
+  elevation: quantity('length', { min: -500, max: 9000, wording: 'an elevation between -500 m and 9000 m' }, 'Elevation above sea level').prefault(0),
   time_zone: z
     .string()
     .meta({ description: 'IANA time zone of the site, e.g. "Europe/Oslo".' })
@@ -89,9 +92,9 @@ const site = z.strictObject({
   first_day: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'expected a date "YYYY-MM-DD"').meta({ description: 'First simulated day, local date "YYYY-MM-DD".' }),
   ground_reflectance: ratio(0, 1, 'a fraction', 'Solar reflectance (albedo) of the ground around the stack').default(0.2),
   terrain: z
-    .union([z.enum(['open', 'suburban', 'city']), ratio(0.05, 0.6, 'a power-law exponent', 'Wind power-law exponent')])
+    .union([z.enum(Object.keys(TERRAIN_EXPONENTS) as [Terrain, ...Terrain[]]), ratio(0.05, 0.6, 'a power-law exponent', 'Wind power-law exponent')])
     .default('suburban')
-    .meta({ description: 'Terrain around the stack for the wind profile: flat, open, suburban, city, or the power-law exponent itself.' }),
+    .meta({ description: `Terrain around the stack for the wind profile: ${Object.keys(TERRAIN_EXPONENTS).join(', ')}, or the power-law exponent itself.` }),
 });
 
 const propertyTable = (kind: 'conductivity' | 'specificHeat', description: string) =>
@@ -135,7 +138,7 @@ const layer = z.strictObject({
   ]),
   thickness: positiveLength('Layer thickness'),
   cells: z.union([z.literal('auto'), count(1, 200, 'Finite-volume cells across the layer')]).default('auto'),
-  contact_resistance: quantity('contactResistance', { min: 0, wording: 'a contact resistance of zero or more' }, 'Contact resistance to the next layer outward').default(0),
+  contact_resistance: quantity('contactResistance', { min: 0, wording: 'a contact resistance of zero or more' }, 'Contact resistance to the next layer outward').prefault(0),
 });
 
 const stack = z.strictObject({
@@ -158,7 +161,7 @@ const outside = z.strictObject({
   radiation: z
     .union([z.enum(['sky-ground', 'none']), z.strictObject({ surroundings: temperature('Temperature of the surroundings') })])
     .default('sky-ground'),
-  sky: z.enum(['swinbank', 'berdahl-martin']).default('berdahl-martin').meta({ description: 'Sky temperature model.' }),
+  sky: z.enum(Object.keys(SKY_MODELS) as [SkyModelName, ...SkyModelName[]]).default('berdahl-martin').meta({ description: 'Sky temperature model.' }),
   ground_temperature: temperature('Ground temperature (default: the air temperature)').optional(),
   sun: z.boolean().default(true).meta({ description: 'Apply absorbed sun.' }),
 });
@@ -176,7 +179,7 @@ const weather = z
   .strictObject({
     design_day: designDay.optional(),
     file: z.string().min(1).optional().meta({ description: 'Hourly weather CSV, path relative to the scenario file.' }),
-    wind_reference_height: quantity('length', { min: 0.5, max: 300, wording: 'a height from 0.5 m to 300 m' }, 'Height of the wind measurement').default(10),
+    wind_reference_height: quantity('length', { min: 0.5, max: 300, wording: 'a height from 0.5 m to 300 m' }, 'Height of the wind measurement').prefault(10),
   })
   .check((ctx) => {
     const v = ctx.value;
@@ -201,7 +204,7 @@ const gas = z
   .strictObject({
     fuel: z
       .string()
-      .meta({ description: 'Fuel name (natural-gas, light-fuel-oil, heavy-fuel-oil, bituminous-coal, wood); the flue gas follows by stoichiometry.' })
+      .meta({ description: `Fuel name (${Object.keys(FUELS).join(', ')}); the flue gas follows by stoichiometry.` })
       .check((ctx) => {
         if (!Object.hasOwn(FUELS, ctx.value)) ctx.issues.push({ code: 'custom', input: ctx.value, message: `found "${ctx.value}"; expected one of ${Object.keys(FUELS).join(', ')}` });
       })
@@ -266,14 +269,14 @@ const flue = z.strictObject({
 const run = z.strictObject({
   mode: z.enum(['cycle', 'warmup']).default('cycle'),
   days: z.union([count(1, 366, 'Days to simulate'), z.literal('until-periodic')]).default(1),
-  periodic_tolerance: quantity('temperatureDifference', { min: 0, exclusiveMin: true, wording: 'a positive temperature difference' }, 'Largest day-to-day change of any node for the periodic state').default(0.05),
+  periodic_tolerance: quantity('temperatureDifference', { min: 0, exclusiveMin: true, wording: 'a positive temperature difference' }, 'Largest day-to-day change of any node for the periodic state').prefault(0.05),
   max_days: count(1, 366, 'Most days to try for the periodic state').default(30),
-  output_interval: quantity('duration', { min: 60, max: 6 * 3600, wording: 'an interval from 1 min to 6 h' }, 'Interval between output instants').default(10),
+  output_interval: quantity('duration', { min: 60, max: 6 * 3600, wording: 'an interval from 1 min to 6 h' }, 'Interval between output instants').prefault(10),
   initial: z.enum(['steady', 'steady-at-start', 'cold']).default('steady').meta({ description: 'Initial wall: steady at the daily-mean conditions, steady at the first instant, or cold (at air temperature).' }),
   firing_start: clockTime.optional(),
-  integrator: z.enum(['implicit', 'rk45']).default('implicit'),
+  integrator: z.enum(Object.keys(INTEGRATORS) as [IntegratorName, ...IntegratorName[]]).default('implicit'),
   relative_tolerance: z.number().min(1e-9).max(1e-2).default(1e-5),
-  absolute_tolerance: quantity('temperatureDifference', { min: 1e-6, max: 1, wording: 'a temperature difference from 1e-6 K to 1 K' }, 'Absolute tolerance of the integrator').default(0.01),
+  absolute_tolerance: quantity('temperatureDifference', { min: 1e-6, max: 1, wording: 'a temperature difference from 1e-6 K to 1 K' }, 'Absolute tolerance of the integrator').prefault(0.01),
 });
 
 const limits = z.strictObject({
@@ -291,11 +294,11 @@ export const scenarioSchema = z
     site,
     stack,
     surface,
-    outside: outside.default({ film_coefficient: 'auto', radiation: 'sky-ground', sky: 'berdahl-martin', sun: true }),
+    outside: outside.prefault({}),
     weather,
     flue,
-    run: run.default({} as never),
-    limits: limits.default({}),
+    run: run.prefault({}),
+    limits: limits.prefault({}),
   })
   .meta({ title: 'stackday scenario', description: 'A stack, its wall build-up, the site, the weather, the firing and the run.' });
 

@@ -3,7 +3,7 @@
  * vertical surface, their combination, and the film coefficient of one segment.
  *
  * Pure functions of dimensionless groups. The caller supplies air properties evaluated at the
- * FILM temperature T_f = (T_s + T_air)/2 (design.md section 3); nothing here looks properties up.
+ * FILM temperature T_f = (T_s + T_air)/2 (docs/model.md, "Outside"); nothing here looks properties up.
  */
 
 import { STANDARD_GRAVITY } from '../constants.ts';
@@ -178,6 +178,29 @@ export interface OutsideFilmResult {
   readonly slenderCorrected: boolean;
 }
 
+/**
+ * The four correlations `outsideFilmCoefficient` combines, as plain functions: the model passes the
+ * ones it selected by name from the correlation registry; the default is this module's own.
+ */
+export interface OutsideFilmCorrelations {
+  /** Nu_D of a cylinder in cross flow from (Re, Pr). */
+  readonly forced: (re: number, pr: number) => number;
+  /** Nu_L of a vertical surface from (Ra_L, Pr). */
+  readonly natural: (ra: number, pr: number) => number;
+  /** Slender-cylinder factor Nu_cyl/Nu_plate from (Gr_L, Pr, L, D). */
+  readonly slender: (grashofHeight: number, pr: number, height: number, diameter: number) => number;
+  /** Combination of forced and natural (on a common basis). */
+  readonly mixed: (forced: number, natural: number) => number;
+}
+
+/** This module's correlations: Churchill–Bernstein, Churchill–Chu, Popiel, Churchill's n = 3 mix. */
+export const DEFAULT_OUTSIDE_FILM_CORRELATIONS: OutsideFilmCorrelations = {
+  forced: nuCylinderChurchillBernstein,
+  natural: nuVerticalPlateChurchillChu,
+  slender: slenderCylinderFactorPopiel,
+  mixed: (a, b) => nuMixedChurchill(a, b, 3),
+};
+
 /** Upper Ra_L of the laminar range in which the Popiel slender-cylinder factor is applied. */
 export const POPIEL_MAX_RAYLEIGH = 1e9;
 
@@ -204,6 +227,7 @@ export const POPIEL_MAX_RAYLEIGH = 1e9;
 export function outsideFilmCoefficient(
   input: OutsideFilmInput,
   air: FilmAirProperties,
+  correlations: OutsideFilmCorrelations = DEFAULT_OUTSIDE_FILM_CORRELATIONS,
 ): OutsideFilmResult {
   const { windSpeed, outerDiameter, height: stackHeight, surfaceTemperatureK, airTemperatureK } =
     input;
@@ -216,24 +240,24 @@ export function outsideFilmCoefficient(
   const hasWind = re > 0;
   const hasBuoyancy = ra > 0;
 
-  const nuForced = hasWind ? nuCylinderChurchillBernstein(re, air.prandtl) : 0;
+  const nuForced = hasWind ? correlations.forced(re, air.prandtl) : 0;
   const slender = isSlenderVerticalCylinder(outerDiameter, stackHeight, grashof);
   const slenderCorrected = hasBuoyancy && slender && ra <= POPIEL_MAX_RAYLEIGH;
   let nuNatural = 0;
   if (hasBuoyancy) {
-    nuNatural = nuVerticalPlateChurchillChu(ra, air.prandtl);
+    nuNatural = correlations.natural(ra, air.prandtl);
     if (slenderCorrected) {
-      nuNatural *= slenderCylinderFactorPopiel(grashof, air.prandtl, stackHeight, outerDiameter);
+      nuNatural *= correlations.slender(grashof, air.prandtl, stackHeight, outerDiameter);
     }
   }
 
   let hForced = (nuForced * air.conductivity) / outerDiameter;
   let hNatural = (nuNatural * air.conductivity) / stackHeight;
   if (!hasWind && !hasBuoyancy) {
-    hForced = (nuCylinderChurchillBernstein(0, air.prandtl) * air.conductivity) / outerDiameter;
-    hNatural = (nuVerticalPlateChurchillChu(0, air.prandtl) * air.conductivity) / stackHeight;
+    hForced = (correlations.forced(0, air.prandtl) * air.conductivity) / outerDiameter;
+    hNatural = (correlations.natural(0, air.prandtl) * air.conductivity) / stackHeight;
   }
-  const h = nuMixedChurchill(hForced, hNatural, 3);
+  const h = correlations.mixed(hForced, hNatural);
   const nuMixed = (h * outerDiameter) / air.conductivity;
   return {
     h,

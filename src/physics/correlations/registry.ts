@@ -1,8 +1,10 @@
 /**
  * One typed table of the heat-transfer correlations: name → function, inputs, validity ranges,
- * description and source. Callers select a correlation by name here (never a hand-kept if/else
- * chain), and ask `checkValidity` for a warning when an input is outside the published range
- * (a warning for the run summary, not an exception).
+ * description and source. The model selects the correlation for each of its roles by name here
+ * (model/correlations.ts; never a hand-kept if/else chain), and every evaluation at a reported
+ * instant is range-checked through `CorrelationRangeTally` (a warning for the run summary, not an
+ * exception). The model descriptions in the README and the report are generated from the entries
+ * (`describeCorrelation`).
  */
 
 import {
@@ -35,8 +37,13 @@ export interface Constraint<K extends string> {
 }
 
 export interface CorrelationEntry<K extends string> {
+  /** Short name with author and year, e.g. "Churchill–Bernstein (1977)". */
+  readonly title: string;
   /** Names of the inputs, in the order of the underlying function's parameters. */
   readonly inputs: readonly K[];
+  /** The function itself, inputs positional in the order of `inputs` (what the model evaluates). */
+  readonly compute: (...inputs: number[]) => number;
+  /** The same with named inputs (derived from `compute`; for calls by name). */
   readonly fn: (inputs: Readonly<Record<K, number>>) => number;
   readonly description: string;
   readonly source: string;
@@ -46,15 +53,16 @@ export interface CorrelationEntry<K extends string> {
   readonly constraints: readonly Constraint<K>[];
 }
 
-/** Identity that lets TypeScript infer each entry's input names. */
-function entry<const K extends string>(e: CorrelationEntry<K>): CorrelationEntry<K> {
-  return e;
+/** Builds an entry (its named-input `fn` from `compute`) and lets TypeScript infer the input names. */
+function entry<const K extends string>(e: Omit<CorrelationEntry<K>, 'fn'>): CorrelationEntry<K> {
+  return { ...e, fn: (inputs) => e.compute(...e.inputs.map((k) => inputs[k])) };
 }
 
 export const CORRELATIONS = {
   nuCylinderChurchillBernstein: entry({
+    title: 'Churchill–Bernstein (1977)',
     inputs: ['re', 'pr'],
-    fn: ({ re, pr }) => nuCylinderChurchillBernstein(re, pr),
+    compute: nuCylinderChurchillBernstein,
     description:
       'Average Nu_D of a circular cylinder in cross flow; Re and Nu on the outer diameter, film properties.',
     source:
@@ -64,8 +72,9 @@ export const CORRELATIONS = {
     constraints: [{ label: 'Re·Pr ≥ 0.2', holds: ({ re, pr }) => re * pr >= 0.2 }],
   }),
   nuVerticalPlateChurchillChu: entry({
+    title: 'Churchill–Chu (1975)',
     inputs: ['ra', 'pr'],
-    fn: ({ ra, pr }) => nuVerticalPlateChurchillChu(ra, pr),
+    compute: nuVerticalPlateChurchillChu,
     description:
       'Average Nu_L of an isothermal vertical plate, laminar and turbulent; Ra and Nu on the height, film properties.',
     source:
@@ -75,9 +84,9 @@ export const CORRELATIONS = {
     constraints: [],
   }),
   slenderCylinderFactorPopiel: entry({
+    title: 'Popiel, Wojtkowiak & Bober (2007)',
     inputs: ['grashofHeight', 'pr', 'height', 'diameter'],
-    fn: ({ grashofHeight, pr, height, diameter }) =>
-      slenderCylinderFactorPopiel(grashofHeight, pr, height, diameter),
+    compute: slenderCylinderFactorPopiel,
     description:
       'Ratio Nu_cylinder/Nu_plate for a slender vertical cylinder in laminar natural convection.',
     source:
@@ -91,8 +100,9 @@ export const CORRELATIONS = {
     ],
   }),
   nuMixedChurchill: entry({
+    title: 'Churchill (1977) mixed convection',
     inputs: ['nuForced', 'nuNatural'],
-    fn: ({ nuForced, nuNatural }) => nuMixedChurchill(nuForced, nuNatural, 3),
+    compute: (nuForced, nuNatural) => nuMixedChurchill(nuForced, nuNatural, 3),
     description:
       'Mixed convection (Nu_F³ + Nu_N³)^(1/3); both Nusselt numbers on the same length.',
     source: 'Churchill, AIChE J. 23 (1977) 10–16; exponent 3 is common practice',
@@ -100,16 +110,18 @@ export const CORRELATIONS = {
     constraints: [],
   }),
   frictionFactorPetukhov: entry({
+    title: 'Petukhov (1970)',
     inputs: ['re'],
-    fn: ({ re }) => frictionFactorPetukhov(re),
+    compute: frictionFactorPetukhov,
     description: 'Darcy friction factor of a smooth tube, turbulent flow.',
     source: 'Petukhov, Advances in Heat Transfer 6 (1970) 503–564',
     ranges: { re: [3000, 5e6] },
     constraints: [],
   }),
   nuPipeGnielinski: entry({
+    title: 'Gnielinski (1976)',
     inputs: ['re', 'pr'],
-    fn: ({ re, pr }) => nuPipeGnielinski(re, pr),
+    compute: (re, pr) => nuPipeGnielinski(re, pr),
     description:
       'Average Nu_D of fully developed turbulent flow in a smooth tube; bulk properties.',
     source: 'Gnielinski, Int. Chem. Eng. 16 (1976) 359–368',
@@ -117,16 +129,18 @@ export const CORRELATIONS = {
     constraints: [],
   }),
   nuPipeLaminarConstantWall: entry({
+    title: 'Laminar tube flow, Nu = 3.66',
     inputs: ['re'],
-    fn: () => NU_PIPE_LAMINAR_CONSTANT_WALL,
+    compute: () => NU_PIPE_LAMINAR_CONSTANT_WALL,
     description: 'Fully developed laminar flow in a tube at uniform wall temperature, Nu = 3.66.',
     source: 'Graetz problem; e.g. Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, eq. 8.55',
     ranges: { re: [0, RE_LAMINAR_LIMIT] },
     constraints: [],
   }),
   nuPipeBlended: entry({
+    title: 'Gnielinski (1976/2013) with laminar blend',
     inputs: ['re', 'pr'],
-    fn: ({ re, pr }) => nuPipeBlended(re, pr),
+    compute: nuPipeBlended,
     description:
       'Tube Nu over all Re: 3.66 laminar, linear in Re from 2300 to 10⁴, Gnielinski above; bulk properties.',
     source:
@@ -135,9 +149,9 @@ export const CORRELATIONS = {
     constraints: [],
   }),
   effectiveConductivityRatioAnnulusRaithbyHollands: entry({
+    title: 'Raithby–Hollands (1975) annulus',
     inputs: ['innerDiameter', 'outerDiameter', 'rayleighGap', 'pr'],
-    fn: ({ innerDiameter, outerDiameter, rayleighGap, pr }) =>
-      effectiveConductivityRatioAnnulusRaithbyHollands(innerDiameter, outerDiameter, rayleighGap, pr),
+    compute: effectiveConductivityRatioAnnulusRaithbyHollands,
     description:
       'k_eff/k of a concentric-cylinder annulus (≥ 1); Ra on the gap width, properties at the mean gap temperature.',
     source:
@@ -220,4 +234,51 @@ export function callCorrelation<N extends CorrelationName>(
 function formatNumber(v: number): string {
   if (!Number.isFinite(v)) return String(v);
   return Math.abs(v) >= 1e5 || (v !== 0 && Math.abs(v) < 1e-3) ? v.toExponential(2) : String(Number(v.toPrecision(4)));
+}
+
+/** One line for model descriptions: "title: description Source: …". */
+export function describeCorrelation(name: CorrelationName): string {
+  const e = looseEntry(name);
+  const ranges = e.inputs
+    .filter((k) => e.ranges[k] && Number.isFinite(e.ranges[k]![1]) && e.ranges[k]![0] !== e.ranges[k]![1])
+    .map((k) => `${formatNumber(e.ranges[k]![0])} ≤ ${k} ≤ ${formatNumber(e.ranges[k]![1])}`);
+  const validity = [...ranges, ...e.constraints.map((c) => c.label)];
+  return `${e.title}: ${e.description}${validity.length ? ` Published range: ${validity.join(', ')}.` : ''} Source: ${e.source}.`;
+}
+
+/**
+ * Counts, per correlation, the evaluations checked and those outside the published range, keeping
+ * the first warning of each; `warnings()` gives one line per correlation used beyond its range.
+ */
+export class CorrelationRangeTally {
+  private readonly seen = new Map<CorrelationName, { checked: number; outside: number; example: string }>();
+
+  /** Check one evaluation of `name` with these inputs. */
+  note<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>): void {
+    const warning = checkValidity(name, inputs);
+    const v = this.seen.get(name) ?? { checked: 0, outside: 0, example: '' };
+    v.checked++;
+    if (warning) {
+      v.outside++;
+      if (!v.example) v.example = warning;
+    }
+    this.seen.set(name, v);
+  }
+
+  /** How many evaluations of `name` were checked and how many were outside the range. */
+  counts(name: CorrelationName): { checked: number; outside: number } {
+    const v = this.seen.get(name);
+    return { checked: v?.checked ?? 0, outside: v?.outside ?? 0 };
+  }
+
+  /** One warning per correlation used outside its published range, with how often. */
+  warnings(): string[] {
+    const out: string[] = [];
+    for (const [, v] of this.seen) {
+      if (v.outside === 0) continue;
+      const pct = (100 * v.outside) / v.checked;
+      out.push(`correlation outside its published range at ${pct < 1 ? pct.toFixed(2) : pct.toFixed(0)} % of the output points (first: ${v.example})`);
+    }
+    return out;
+  }
 }

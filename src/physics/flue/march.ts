@@ -1,5 +1,5 @@
 /**
- * Quasi-steady gas cooling through one axial segment of the flue (design notes §4).
+ * Quasi-steady gas cooling through one axial segment of the flue (docs/model.md, "Flue side").
  *
  * The gas crosses the stack in seconds while the wall changes over minutes, so within one step the
  * gas is steady: along a segment at uniform wall temperature T_w,
@@ -35,8 +35,36 @@ export function gasOutletTemperature(
   massFlow: number,
   specificHeat: number,
 ): number {
-  const ntu = segmentNtu(filmCoefficient, innerDiameter, segmentLength, massFlow, specificHeat);
-  return wallK + (inletK - wallK) * Math.exp(-ntu);
+  return marchThroughSegment(inletK, wallK, filmCoefficient * Math.PI * innerDiameter * segmentLength, massFlow * specificHeat, scratch).gasOutK;
+}
+
+const scratch: SegmentMarch = { gasOutK: 0, heatW: 0, conductanceWPerK: 0 };
+
+/** Outcome of the gas crossing one segment (see `marchThroughSegment`). */
+export interface SegmentMarch {
+  /** Gas temperature leaving the segment, K. */
+  gasOutK: number;
+  /** Heat from the gas into the wall over the segment, W. */
+  heatW: number;
+  /** −∂heatW/∂T_w, W/K (≥ 0): how much more heat the wall takes per kelvin it is colder. */
+  conductanceWPerK: number;
+}
+
+/**
+ * The gas crossing one segment at uniform wall temperature, all at once (no allocation: fills `out`):
+ *   ε = 1 − e^(−UA/(ṁc_p)) (computed as −expm1, exact for tiny NTU),
+ *   T_out = T_in − (T_in − T_w) ε,   Q = ṁ c_p (T_in − T_w) ε,   −∂Q/∂T_w = ṁ c_p ε.
+ * `ua` = h π D Δz in W/K, `capacityRate` = ṁ c_p in W/K. No flow (ṁ c_p = 0): the gas leaves at the
+ * wall temperature and gives nothing; no transfer (UA = 0): the gas leaves unchanged.
+ * Example: T_in 500 K, T_w 400 K, UA 314.159 W/K, ṁc_p 11 000 W/K → ε 0.028156, T_out 497.1844 K,
+ * Q 30 972 W.
+ */
+export function marchThroughSegment(inletK: number, wallK: number, ua: number, capacityRate: number, out: SegmentMarch): SegmentMarch {
+  const effectiveness = !(ua > 0) ? 0 : capacityRate > 0 ? -Math.expm1(-ua / capacityRate) : 1;
+  out.gasOutK = inletK - (inletK - wallK) * effectiveness;
+  out.heatW = capacityRate > 0 ? capacityRate * (inletK - wallK) * effectiveness : 0;
+  out.conductanceWPerK = capacityRate > 0 ? capacityRate * effectiveness : 0;
+  return out;
 }
 
 /**
@@ -55,8 +83,5 @@ export function heatToWall(
   massFlow: number,
   specificHeat: number,
 ): number {
-  const capacity = massFlow * specificHeat;
-  if (!(capacity > 0)) return 0;
-  const ntu = segmentNtu(filmCoefficient, innerDiameter, segmentLength, massFlow, specificHeat);
-  return -capacity * (inletK - wallK) * Math.expm1(-ntu);
+  return marchThroughSegment(inletK, wallK, filmCoefficient * Math.PI * innerDiameter * segmentLength, massFlow * specificHeat, scratch).heatW;
 }

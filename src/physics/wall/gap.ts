@@ -1,31 +1,54 @@
 /**
  * Conductance of an air gap between two concentric cylindrical surfaces, per metre of height
- * (design.md section 2): still-air conduction, raised by natural convection where the gap is wide
- * enough (Raithby–Hollands effective conductivity), plus grey radiation between the two surfaces.
+ * (docs/model.md, "Wall"): still-air conduction, raised by natural convection where the gap is
+ * wide enough (an effective-conductivity correlation, by default Raithby–Hollands), plus grey
+ * radiation between the two surfaces.
  */
-import { airPropertiesAt, airPropertiesInto } from '../properties/air.ts';
+import { airPropertiesInto, airPropertiesAt } from '../properties/air.ts';
 import { effectiveConductivityRatioAnnulusRaithbyHollands } from '../correlations/enclosure.ts';
 import { STANDARD_GRAVITY } from '../constants.ts';
 import { radiationCoefficientConcentricCylinders } from '../correlations/radiation.ts';
 import type { GapLink } from './mesh.ts';
 
-/**
- * Conductance of the gap per metre of height, W/(m K), between surface temperatures t1K (inner)
- * and t2K (outer): G = 2π k_eff / ln(r₂/r₁) + 2π r₁ σ (T₁² + T₂²)(T₁ + T₂) / (1/ε₁ + (r₁/r₂)(1/ε₂ − 1)).
- * Air properties at the mean of the two surface temperatures.
- */
+/** k_eff/k of the gap from (D_i, D_o, Ra on the gap width, Pr). */
+export type GapConvectionRatio = (innerDiameter: number, outerDiameter: number, rayleighGap: number, pr: number) => number;
+
 const scratchAir = airPropertiesAt(300);
 
-export function gapConductancePerMetre(gap: GapLink, t1K: number, t2K: number): number {
+/** The dimensionless inputs of the gap's convection correlation at surface temperatures t1K, t2K. */
+export interface GapConvectionInputs {
+  /** Rayleigh number on the gap width, g β |T₁ − T₂| L³ / (ν α). */
+  rayleighGap: number;
+  /** Prandtl number of the air at the mean temperature. */
+  pr: number;
+}
+
+/**
+ * Rayleigh number on the gap width and Prandtl number of the air in the gap, properties at the
+ * mean of the two surface temperatures. Fills and returns `out`.
+ */
+export function gapConvectionInputs(gap: GapLink, t1K: number, t2K: number, out: GapConvectionInputs): GapConvectionInputs {
+  const air = airPropertiesInto(scratchAir, 0.5 * (t1K + t2K));
+  const width = gap.outerRadius - gap.innerRadius;
+  const diffusivity = air.kinematicViscosity / air.prandtl;
+  out.rayleighGap = (STANDARD_GRAVITY * air.expansion * Math.abs(t1K - t2K) * width ** 3) / (air.kinematicViscosity * diffusivity);
+  out.pr = air.prandtl;
+  return out;
+}
+
+const inputs: GapConvectionInputs = { rayleighGap: 0, pr: 0 };
+
+/**
+ * Conductance of the gap per metre of height, W/(m K), between surface temperatures t1K (inner)
+ * and t2K (outer): G = 2π k k_eff/k / ln(r₂/r₁) + 2π r₁ σ (T₁² + T₂²)(T₁ + T₂) / (1/ε₁ + (r₁/r₂)(1/ε₂ − 1)).
+ * Air properties at the mean of the two surface temperatures; k_eff/k from `convectionRatio`.
+ */
+export function gapConductancePerMetre(gap: GapLink, t1K: number, t2K: number, convectionRatio: GapConvectionRatio = effectiveConductivityRatioAnnulusRaithbyHollands): number {
   const r1 = gap.innerRadius;
   const r2 = gap.outerRadius;
-  const tm = 0.5 * (t1K + t2K);
-  const air = airPropertiesInto(scratchAir, tm);
-  const width = r2 - r1;
-  const diffusivity = air.kinematicViscosity / air.prandtl;
-  const rayleigh = (STANDARD_GRAVITY * air.expansion * Math.abs(t1K - t2K) * width ** 3) / (air.kinematicViscosity * diffusivity);
-  const ratio = effectiveConductivityRatioAnnulusRaithbyHollands(2 * r1, 2 * r2, rayleigh, air.prandtl);
-  const conduction = (2 * Math.PI * air.conductivity * ratio) / Math.log(r2 / r1);
+  gapConvectionInputs(gap, t1K, t2K, inputs);
+  const ratio = convectionRatio(2 * r1, 2 * r2, inputs.rayleighGap, inputs.pr);
+  const conduction = (2 * Math.PI * scratchAir.conductivity * ratio) / Math.log(r2 / r1);
   const radiationCoefficient = radiationCoefficientConcentricCylinders(t1K, t2K, gap.innerEmissivity, gap.outerEmissivity, r1, r2);
   return conduction + 2 * Math.PI * r1 * radiationCoefficient;
 }

@@ -1,0 +1,167 @@
+/**
+ * The outer boundary of one axial segment: convection to the air, long-wave radiation to the
+ * surroundings and absorbed sun, each per metre of stack height, with the derivative of the loss
+ * for the Jacobian. The radiation model (sky and ground, fixed surroundings, none) and the sky model
+ * are chosen here, in one place: `surroundingTemperatures` says what the surface sees,
+ * `outerBoundaryOfSegment` what it exchanges with it.
+ *
+ * SI units: K, m/s, m, W/m, W/(m K). Pure apart from writing `out` (and the air-property scratch).
+ */
+import { airPropertiesInto, type AirProperties } from '../properties/air.ts';
+import { outsideFilmCoefficient, type OutsideFilmCorrelations } from '../correlations/external.ts';
+import {
+  radiationCoefficientToSkyAndGround,
+  radiationToSkyAndGround,
+  skyEmissivityBerdahlMartin,
+  skyEmissivityCloudCorrection,
+  skyTemperatureFromEmissivity,
+  skyTemperatureSwinbank,
+} from '../correlations/radiation.ts';
+import type { AirState } from './weather.ts';
+
+/**
+ * Sky models by name: the effective sky temperature from the outside air at one instant, K. The
+ * scenario's list of sky models is read from this table.
+ */
+export const SKY_MODELS = {
+  /** Berdahl & Martin (1984) clear-sky emissivity from the dew point, Clark & Allen (1978) cloud factor. */
+  'berdahl-martin': (air: AirState): number =>
+    skyTemperatureFromEmissivity(Math.min(1, skyEmissivityCloudCorrection(skyEmissivityBerdahlMartin(air.dewPointK), air.cloudCover)), air.airTemperatureK),
+  /** Swinbank (1963) clear sky from the air temperature alone. */
+  swinbank: (air: AirState): number => skyTemperatureSwinbank(air.airTemperatureK),
+} as const satisfies Record<string, (air: AirState) => number>;
+
+export type SkyModelName = keyof typeof SKY_MODELS;
+
+/** What the outer surface radiates to. */
+export type OutsideRadiation =
+  /** Half sky (at the sky model's temperature), half ground (at `groundTemperatureK`, default the air temperature). */
+  | { readonly kind: 'sky-ground'; readonly sky: SkyModelName; readonly groundTemperatureK?: number }
+  /** Large surroundings at one temperature (sky and ground both at it). */
+  | { readonly kind: 'surroundings'; readonly temperatureK: number }
+  /** No long-wave exchange. */
+  | { readonly kind: 'none' };
+
+/** Temperatures the outer surface sees: sky and ground, K. */
+export interface Surroundings {
+  skyTemperatureK: number;
+  groundTemperatureK: number;
+}
+
+/**
+ * Sky and ground temperatures for the radiation model at the air state `air`. With no radiation,
+ * both are the air temperature (nothing is exchanged; the values only appear in reports).
+ */
+export function surroundingTemperatures(radiation: OutsideRadiation, air: AirState, out: Surroundings): Surroundings {
+  switch (radiation.kind) {
+    case 'sky-ground':
+      out.skyTemperatureK = SKY_MODELS[radiation.sky](air);
+      out.groundTemperatureK = radiation.groundTemperatureK ?? air.airTemperatureK;
+      break;
+    case 'surroundings':
+      out.skyTemperatureK = radiation.temperatureK;
+      out.groundTemperatureK = radiation.temperatureK;
+      break;
+    case 'none':
+      out.skyTemperatureK = air.airTemperatureK;
+      out.groundTemperatureK = air.airTemperatureK;
+      break;
+  }
+  return out;
+}
+
+/** What stays fixed for the whole run at the outer surface. */
+export interface OuterSurfaceSpec {
+  /** Outer diameter, m. */
+  readonly outerDiameter: number;
+  /** Stack height, m (length of natural convection). */
+  readonly height: number;
+  /** Thermal emissivity of the outer surface, –. */
+  readonly emissivity: number;
+  /** Fixed outside film coefficient, W/(m² K); undefined: correlations (forced, natural, mixed). */
+  readonly filmCoefficient: number | undefined;
+  readonly radiation: OutsideRadiation;
+  /** The film correlations (forced, natural, slender, mixed) the model selected. */
+  readonly filmCorrelations: OutsideFilmCorrelations;
+}
+
+/** Conditions outside one segment at one instant. */
+export interface OutsideConditions {
+  readonly airTemperatureK: number;
+  /** Wind speed at the segment's height, m/s. */
+  readonly windSpeed: number;
+  readonly skyTemperatureK: number;
+  readonly groundTemperatureK: number;
+  /** Absorbed sun, W per metre of height. */
+  readonly sunPerMetre: number;
+}
+
+/** The outer boundary of one segment at one instant. */
+export interface OuterBoundaryOfSegment {
+  /** Convection to the air, W/m (positive: heat leaves). */
+  convectionPerMetre: number;
+  /** Net long-wave radiation, W/m (positive: heat leaves). */
+  radiationPerMetre: number;
+  /** Absorbed sun, W/m. */
+  sunPerMetre: number;
+  /** ∂(convection + radiation)/∂T_surface, W/(m K), with the film coefficient held (for the Jacobian). */
+  sinkPerMetre: number;
+  /** Outside film coefficient, W/(m² K). */
+  filmCoefficient: number;
+  /** Reynolds number on the outer diameter, Rayleigh number on the height, Grashof number on the height and film Prandtl number (NaN with a fixed film coefficient). */
+  reynolds: number;
+  rayleigh: number;
+  grashof: number;
+  prandtl: number;
+  /** Whether the slender-cylinder factor was applied to natural convection. */
+  slenderCorrected: boolean;
+}
+
+export function emptyOuterBoundary(): OuterBoundaryOfSegment {
+  return { convectionPerMetre: 0, radiationPerMetre: 0, sunPerMetre: 0, sinkPerMetre: 0, filmCoefficient: 0, reynolds: Number.NaN, rayleigh: Number.NaN, grashof: Number.NaN, prandtl: Number.NaN, slenderCorrected: false };
+}
+
+/**
+ * Outer boundary of one segment with its surface at `surfaceK`: convection h P (T_s − T_air) with
+ * h fixed or from the film correlations at the film temperature (T_s + T_air)/2 (air properties
+ * written into `film`), radiation ε σ [½(T_s⁴ − T_sky⁴) + ½(T_s⁴ − T_ground⁴)] P, absorbed sun as
+ * given; P = π D_o. Fills and returns `out`.
+ * Example: h fixed 10, D_o 2 m, T_s 300 K, T_air 290 K, no radiation → convection 10·2π·10 = 628.3 W/m.
+ */
+export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number, c: OutsideConditions, film: AirProperties, out: OuterBoundaryOfSegment): OuterBoundaryOfSegment {
+  const perimeter = Math.PI * spec.outerDiameter;
+  let h: number;
+  if (spec.filmCoefficient !== undefined) {
+    h = spec.filmCoefficient;
+    out.reynolds = Number.NaN;
+    out.rayleigh = Number.NaN;
+    out.grashof = Number.NaN;
+    out.prandtl = Number.NaN;
+    out.slenderCorrected = false;
+  } else {
+    const air = airPropertiesInto(film, 0.5 * (surfaceK + c.airTemperatureK));
+    const f = outsideFilmCoefficient(
+      { windSpeed: c.windSpeed, outerDiameter: spec.outerDiameter, height: spec.height, surfaceTemperatureK: surfaceK, airTemperatureK: c.airTemperatureK },
+      air,
+      spec.filmCorrelations,
+    );
+    h = f.h;
+    out.reynolds = f.re;
+    out.rayleigh = f.ra;
+    out.grashof = f.grashof;
+    out.prandtl = air.prandtl;
+    out.slenderCorrected = f.slenderCorrected;
+  }
+  let radiation = 0;
+  let radiationSink = 0;
+  if (spec.radiation.kind !== 'none') {
+    radiation = radiationToSkyAndGround(surfaceK, spec.emissivity, c.skyTemperatureK, c.groundTemperatureK) * perimeter;
+    radiationSink = radiationCoefficientToSkyAndGround(surfaceK, spec.emissivity) * perimeter;
+  }
+  out.convectionPerMetre = h * perimeter * (surfaceK - c.airTemperatureK);
+  out.radiationPerMetre = radiation;
+  out.sunPerMetre = c.sunPerMetre;
+  out.sinkPerMetre = h * perimeter + radiationSink;
+  out.filmCoefficient = h;
+  return out;
+}
