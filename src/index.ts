@@ -15,10 +15,12 @@ import type { ModelInputs } from './model/inputs.ts';
 import type { RunResult } from './model/timeseries.ts';
 import type { Summary } from './analysis/summary.ts';
 
-export { loadScenarioFile, validateScenario } from './input/scenario/load.ts';
+export { loadScenarioFile, readScenarioFile, validateScenario, validateModelInputs, type ScenarioOverride } from './input/scenario/load.ts';
 export { ScenarioError } from './input/scenario/errors.ts';
 export { scenarioSchema, scenarioJsonSchema, type Scenario } from './input/scenario/schema.ts';
 export { simulate, SimulationError } from './model/simulate.ts';
+export { CORRELATIONS, describeCorrelation } from './physics/correlations/registry.ts';
+export { CORRELATIONS_IN_USE } from './model/correlations.ts';
 export { summarise, thermalStressIndicator } from './analysis/metrics.ts';
 export { resultSheet } from './output/console.ts';
 export { MATERIALS, findMaterial, materialNames } from './physics/materials/index.ts';

@@ -1,7 +1,7 @@
 /**
  * From the time series to the figures an engineer acts on: peaks, daily ranges and swings,
  * through-wall differences and the thermal-stress indicator, dew-point margins and hours below,
- * warm-up times, heat per day, and a verdict against every limit (design.md section 6).
+ * warm-up times, heat per day, and a verdict against every limit (docs/model.md "Results").
  */
 import type { ModelInputs } from '../model/inputs.ts';
 import type { RunResult, TimeSeries, EnergyAccount } from '../model/timeseries.ts';

@@ -140,7 +140,7 @@ export interface Summary {
   readonly cautions: readonly string[];
 }
 
-/** The cautions every report carries (design.md section 7). */
+/** The cautions every report carries (docs/model.md "Cautions"). */
 export const CAUTIONS: readonly string[] = [
   'These results inform engineering judgement; they do not certify a design or an installation.',
   'Hot surfaces burn: touch limits such as those in ISO 13732-1 and ASTM C1055 are guidance; guard or insulate surfaces people can reach.',

@@ -39,7 +39,8 @@ export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
   const [y, mo, d] = [Number(m[1]), Number(m[2]) - 1, Number(m[3])];
   const start = new TZDate(y, mo, d, 0, 0, 0, timeZone);
   const startUtcMs = start.getTime();
-  if (!Number.isFinite(startUtcMs) || start.getDate() !== d) throw new RangeError(`start date "${startDate}" is not a calendar date`);
+  if (!Number.isFinite(startUtcMs) || y < 100 || start.getFullYear() !== y || start.getMonth() !== mo || start.getDate() !== d)
+    throw new RangeError(`start date "${startDate}" is not a calendar date`);
 
   // UTC offsets change only at whole quarter hours of UTC in every zone of the tz database, so
   // the offset is cached per 15-minute block of UTC (the time-zone lookup is costly).

@@ -34,7 +34,7 @@ function dayStops(model: AssembledModel, t0: number, d: number): { stops: number
   const start = t0 + d * SECONDS_PER_DAY;
   const end = start + SECONDS_PER_DAY;
   const out: number[] = [];
-  for (let k = 1; start + k * interval <= end + 1e-6; k++) out.push(Math.min(end, start + k * interval));
+  for (let j = 1; start + j * interval <= end + 1e-6; j++) out.push(Math.min(end, start + j * interval));
   if (out.length === 0 || out[out.length - 1]! < end - 1e-6) out.push(end);
   const isOutput = new Set(out);
   const corners: number[] = [];
@@ -59,9 +59,9 @@ function dayStops(model: AssembledModel, t0: number, d: number): { stops: number
 /** Largest change of any node between two days' states at the same clock instants, K. */
 function largestDailyChange(today: readonly Float64Array[], yesterday: readonly Float64Array[]): number {
   let change = 0;
-  for (let k = 0; k < today.length && k < yesterday.length; k++) {
-    const a = today[k]!;
-    const b = yesterday[k]!;
+  for (let instant = 0; instant < today.length && instant < yesterday.length; instant++) {
+    const a = today[instant]!;
+    const b = yesterday[instant]!;
     for (let i = 0; i < a.length; i++) change = Math.max(change, Math.abs(a[i]! - b[i]!));
   }
   return change;

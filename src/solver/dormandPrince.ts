@@ -1,7 +1,7 @@
 /**
  * Explicit Dormand–Prince 5(4) pair with first-same-as-last, local extrapolation (the fifth-order
  * solution is propagated) and adaptive steps: the reference integrator for tests and benchmarks.
- * On the stiff wall model its step is bounded by stability, not accuracy (see design.md, Sect. 5);
+ * On the stiff wall model its step is bounded by stability, not accuracy (see docs/model.md, "Time integration");
  * use TR-BDF2 there. Ignores `system.jacobian`.
  *
  * Source: J. R. Dormand & P. J. Prince (1980), "A family of embedded Runge–Kutta formulae",

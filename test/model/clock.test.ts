@@ -22,3 +22,13 @@ describe('makeSiteClock', () => {
     expect(() => makeSiteClock('UTC', '30.02.2026')).toThrow(/YYYY-MM-DD/);
   });
 });
+
+describe('start dates are real calendar dates', () => {
+  it.each(['2026-13-01', '2026-00-10', '0000-01-01', '0001-01-01', '2026-02-30', '2025-02-29', '2026-04-31'])('%s is refused', (date) => {
+    expect(() => makeSiteClock('UTC', date)).toThrow(/not a calendar date/);
+  });
+
+  it.each(['2024-02-29', '2026-12-31', '1900-01-01'])('%s is accepted', (date) => {
+    expect(makeSiteClock('UTC', date).startDate).toBe(date);
+  });
+});

@@ -41,7 +41,7 @@ const gas = makeGasPropertyTable(composition, 101325);
 
 describe('gas cooling up the stack', () => {
   it('loses exactly the heat the wall takes up: ṁ ∫c_p dT from exit to inlet = Σ q′Δz within 0.1 %', () => {
-    // energy conservation of the quasi-steady gas (design.md section 4); c_p(T) of the mixture
+    // energy conservation of the quasi-steady gas (docs/model.md "Flue side"); c_p(T) of the mixture
     // integrated independently here by the trapezoid rule on a 0.1 K grid
     const dz = inputs.stack.height / inputs.stack.segments;
     let checked = 0;

@@ -12,7 +12,7 @@ import { baseInputs, constantMaterial, layer, airSource, fixedFilmInputs } from 
 const DAY = 86400;
 
 function expectEnergyClosed(r: RunResult) {
-  // design.md section 5: heat from the gas = stored + lost outside; issue: residual below 0.1 %
+  // docs/model.md "Time integration": heat from the gas = stored + lost outside; issue: residual below 0.1 %
   expect(Math.abs(r.energy.run.residualPercent)).toBeLessThan(0.1);
 }
 

@@ -140,7 +140,7 @@ describe('TR-BDF2 and Dormand–Prince on the stiff heat equation', () => {
     expect(maxAbsDifference(explicit.y, exact)).toBeLessThan(1e-4);
     expect(maxAbsDifference(implicit.y, explicit.y)).toBeLessThan(1e-4);
     // Stiffness: λ_max ≈ 4/Δx² ≈ 4e4 caps the explicit step near 3.3/λ_max (stability), while the
-    // L-stable method steps by accuracy on the slow mode alone (design.md, Sect. 5).
+    // L-stable method steps by accuracy on the slow mode alone (docs/model.md, "Time integration").
     expect(explicit.stats.rhsEvaluations).toBeGreaterThanOrEqual(20 * implicit.stats.rhsEvaluations);
   });
 });

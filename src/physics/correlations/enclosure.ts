@@ -37,7 +37,7 @@ export function rayleighAnnulusRaithbyHollands(
  * with Ra_c from `rayleighAnnulusRaithbyHollands`. The heat flow per unit length is then
  * q' = 2π k_eff (T_i − T_o) / ln(D_o/D_i): the gap is treated as a conducting layer.
  * - The max(1, …) enforces pure conduction below the onset of convection (Ra_c ≲ 100).
- * - Caution: the correlation was derived for HORIZONTAL annuli. design.md section 2 applies it to
+ * - Caution: the correlation was derived for HORIZONTAL annuli. docs/model.md ("Wall") applies it to
  *   the vertical annular gap of a stack; a tall vertical annulus behaves more like a vertical
  *   slot, so treat the result as an estimate (common practice when no better data exist).
  * - Validity of the convective branch: 10² ≤ Ra_c ≤ 10⁷ (Incropera & DeWitt, section 9.8, from

@@ -3,7 +3,7 @@
  *
  * Pure functions of dimensionless groups. Characteristic length: the inner diameter of the flue
  * (Re = ṁ D / (A μ) = 4 ṁ / (π D μ), Nu = h D / k). Gas properties at the BULK (mixing-cup)
- * temperature of the gas in the segment (design.md section 4); the caller supplies them.
+ * temperature of the gas in the segment (docs/model.md "Flue side"); the caller supplies them.
  */
 
 /**

@@ -100,7 +100,7 @@ export function skyTemperatureFromEmissivity(eps: number, airTemperatureK: numbe
 
 /**
  * Net long-wave radiation LEAVING a vertical grey surface that sees half sky and half ground
- * (view factor ½ each, design.md section 3), W per m² of surface:
+ * (view factor ½ each, docs/model.md "Outside"), W per m² of surface:
  *
  *   q = ε σ [ ½ (T_s⁴ − T_sky⁴) + ½ (T_s⁴ − T_ground⁴) ]
  *
@@ -168,7 +168,7 @@ export function radiationConcentricCylinders(
  *
  *   h_r = σ (T₁² + T₂²)(T₁ + T₂) / [1/ε₁ + (r₁/r₂)(1/ε₂ − 1)]
  *
- * Stays finite at T₁ = T₂ (then h_r = 4σT³/denominator). design.md section 2.
+ * Stays finite at T₁ = T₂ (then h_r = 4σT³/denominator). docs/model.md "Wall".
  * Example (as above): 5.670374419e-8·250000·700/1.47727 = 6.7172 W/(m² K).
  */
 export function radiationCoefficientConcentricCylinders(

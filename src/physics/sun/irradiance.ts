@@ -147,14 +147,14 @@ export interface AbsorbedSun {
  * reflected 0.9·0.2·500·π = 282.7; total 1812.5 W/m.
  */
 export function absorbedSunPerMetre(input: AbsorbedSunInput): AbsorbedSun {
-  const { diffuseHorizontal, altitudeDeg, outerDiameter: D, solarAbsorptance: a, groundReflectance: rho } = input;
+  const { diffuseHorizontal, altitudeDeg, outerDiameter, solarAbsorptance, groundReflectance } = input;
   const up = altitudeDeg > 0;
   const beamNormal = up ? input.beamNormal : 0;
-  const h = altitudeDeg * DEG;
-  const beam = up ? a * beamNormal * D * Math.cos(h) : 0;
-  const diffuse = a * diffuseHorizontal * Math.PI * D * 0.5;
-  const globalHorizontal = (up ? beamNormal * Math.sin(h) : 0) + diffuseHorizontal;
-  const reflected = a * rho * globalHorizontal * Math.PI * D * 0.5;
+  const altitudeRad = altitudeDeg * DEG;
+  const beam = up ? solarAbsorptance * beamNormal * outerDiameter * Math.cos(altitudeRad) : 0;
+  const diffuse = solarAbsorptance * diffuseHorizontal * Math.PI * outerDiameter * 0.5;
+  const globalHorizontal = (up ? beamNormal * Math.sin(altitudeRad) : 0) + diffuseHorizontal;
+  const reflected = solarAbsorptance * groundReflectance * globalHorizontal * Math.PI * outerDiameter * 0.5;
   return { beam, diffuse, reflected, total: beam + diffuse + reflected };
 }
 

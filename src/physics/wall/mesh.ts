@@ -1,5 +1,5 @@
 /**
- * Radial finite-volume mesh of the layered wall of one axial segment (design.md section 2).
+ * Radial finite-volume mesh of the layered wall of one axial segment (docs/model.md "Wall").
  *
  * Vertex-centred finite volumes: each solid layer of thickness L cut into n cells gets n + 1 nodes,
  * the first and last on the layer's surfaces, so surface and interface temperatures are computed,

@@ -97,7 +97,7 @@ describe('skyTemperatureFromEmissivity', () => {
 
 describe('radiationToSkyAndGround', () => {
   it('matches the half-sky half-ground grey balance worked by hand', () => {
-    // q = εσ[½(T_s⁴ − T_sky⁴) + ½(T_s⁴ − T_g⁴)] (design.md §3): 300⁴ = 8.1e9, 280⁴ = 6.14656e9,
+    // q = εσ[½(T_s⁴ − T_sky⁴) + ½(T_s⁴ − T_g⁴)] (docs/model.md "Outside"): 300⁴ = 8.1e9, 280⁴ = 6.14656e9,
     // 0.9·5.670374419e-8·½·1.95344e9 = 49.8453 W/m². Tolerance 5e-4: six figures.
     expect(radiationToSkyAndGround(300, 0.9, 280, 300)).toBeCloseTo(49.8453, 3);
   });

@@ -88,7 +88,7 @@ describe('cloud reduction (Kasten & Czeplak 1980)', () => {
 
 describe('absorbedSunPerMetre', () => {
   it('matches a hand computation of the projected-area formula', () => {
-    // Hand computation (design.md §3 formula): G_bn 800, G_dh 100 W/m², h 30°, D 2 m, α 0.9, ρ_g 0.2:
+    // Hand computation (docs/model.md "Outside" formula): G_bn 800, G_dh 100 W/m², h 30°, D 2 m, α 0.9, ρ_g 0.2:
     // beam 0.9·800·2·cos30° = 1247.077; diffuse 0.9·100·π·2/2 = 282.743; G_h = 800·0.5 + 100 = 500,
     // reflected 0.9·0.2·500·π·2/2 = 282.743; total 1812.563 W/m.
     const q = absorbedSunPerMetre({ beamNormal: 800, diffuseHorizontal: 100, altitudeDeg: 30, outerDiameter: 2, solarAbsorptance: 0.9, groundReflectance: 0.2 });
