@@ -7,7 +7,8 @@ import type { RunResult } from './timeseries.ts';
 import { assembleModel, type AssembledModel } from './assemble.ts';
 import { makeSegmentDiagnostics, AUX_SIZE } from './system.ts';
 import { INTEGRATORS } from '../solver/index.ts';
-import { IntegrationError } from '../solver/types.ts';
+import { IntegrationError, type IntegratorStats } from '../solver/types.ts';
+import { emptyStats } from '../solver/stepping.ts';
 import { steadyState, averagedOverInstants } from './steady.ts';
 import { SECONDS_PER_DAY } from '../physics/constants.ts';
 import { Recorder } from './recorder.ts';
@@ -24,19 +25,22 @@ export interface SimulateOptions {
 /** Build the mesh, the drivers and the ODE system for the inputs (see assemble.ts). */
 export const prepareModel = assembleModel;
 
+/** Steps never exceed this, s: it bounds the dense output's interpolation error (O(h⁴)) on the daily wave. */
+const MAX_STEP_S = 3600;
+
 /**
- * The instants at which the integrator must stop on day `d` (run time from `t0`): every output
- * instant, and every schedule corner (a ramp's ends, a step) inside the day, without repeats.
+ * Day `d` of the run (run time from `t0`): the instants the integrator must stop at — every
+ * schedule corner inside the day (a ramp's ends, a step: the forcing is not smooth there) and the
+ * day's end — and the output instants, which the integrator fills by interpolation.
  */
-function dayStops(model: AssembledModel, t0: number, d: number): { stops: number[]; isOutput: Set<number> } {
+function dayPlan(model: AssembledModel, t0: number, d: number): { stops: number[]; outputs: number[] } {
   const { ctx, clock, inputs } = model;
   const interval = inputs.run.outputInterval;
   const start = t0 + d * SECONDS_PER_DAY;
   const end = start + SECONDS_PER_DAY;
-  const out: number[] = [];
-  for (let j = 1; start + j * interval <= end + 1e-6; j++) out.push(Math.min(end, start + j * interval));
-  if (out.length === 0 || out[out.length - 1]! < end - 1e-6) out.push(end);
-  const isOutput = new Set(out);
+  const outputs: number[] = [];
+  for (let j = 1; start + j * interval <= end + 1e-6; j++) outputs.push(Math.min(end, start + j * interval));
+  if (outputs.length === 0 || outputs[outputs.length - 1]! < end - 1e-6) outputs.push(end);
   const corners: number[] = [];
   // schedule corners of the days that overlap [start, end] (with a repeated first day: day 0's, shifted)
   const repeat = ctx.repeatFirstDay;
@@ -49,11 +53,21 @@ function dayStops(model: AssembledModel, t0: number, d: number): { stops: number
       if (tc > start + 1e-6 && tc < end - 1e-6) corners.push(tc);
     }
   }
-  const all = [...out, ...corners].sort((a, b) => a - b);
+  corners.sort((a, b) => a - b);
   const stops: number[] = [];
-  for (const s of all) if (stops.length === 0 || s - stops[stops.length - 1]! > 1e-6) stops.push(s);
-  else if (isOutput.has(s)) stops[stops.length - 1] = s;
-  return { stops, isOutput };
+  for (const c of corners) if (stops.length === 0 || c - stops[stops.length - 1]! > 1e-6) stops.push(c);
+  // an output within a microsecond of a corner is taken at the corner (the exact state)
+  for (let j = 0; j < outputs.length; j++) {
+    const near = stops.find((c) => Math.abs(c - outputs[j]!) <= 1e-6);
+    if (near !== undefined) outputs[j] = near;
+  }
+  stops.push(end);
+  return { stops, outputs };
+}
+
+/** Add the counts of one integration to a running total. */
+function addStats(total: IntegratorStats, part: IntegratorStats): void {
+  for (const key of Object.keys(total) as (keyof IntegratorStats)[]) total[key] += part[key];
 }
 
 /** Largest change of any node between two days' states at the same clock instants, K. */
@@ -74,7 +88,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   const { system, geometry, ctx, clock, mesh } = model;
   const run = inputs.run;
   const integrate = INTEGRATORS[run.integrator];
-  const tolerances = { rtol: run.rtol, atol: run.atol, maxStep: Math.min(run.outputInterval, 3600) };
+  const tolerances = { rtol: run.rtol, atol: run.atol, maxStep: MAX_STEP_S };
 
   const t0 = run.mode === 'warmup' ? clock.runTimeOfLocal(0, run.firingStartClockS ?? 0) : 0;
   const totalDays = run.length.kind === 'days' ? run.length.days : run.length.maxDays;
@@ -98,34 +112,43 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   let auxDayStart = new Float64Array(AUX_SIZE);
   const yRunStart = y.slice();
   let yDayStart = y.slice();
-  const stats = { steps: 0, rejected: 0, rhsEvaluations: 0 };
+  const stats = emptyStats();
   let lastStep: number | undefined;
   let periodic: RunResult['periodic'] = null;
   const changeByDay: number[] = [];
-  let previousDay: Float64Array[] | null = null;
+  let previousDay: { t: number[]; states: Float64Array[] } | null = null;
   let daysDone = 0;
+  // a fixed number of days reports every day as it is computed; a periodic study reports only its
+  // settled day, recorded (with the boundary diagnostics) once it is known
   const keepAllDays = run.length.kind === 'days';
 
-  record(t0, y, 0);
+  if (keepAllDays) record(t0, y, 0);
   for (let d = 0; d < totalDays; d++) {
-    const { stops, isOutput } = dayStops(model, t0, d);
+    const { stops, outputs } = dayPlan(model, t0, d);
     const dayStart = t0 + d * SECONDS_PER_DAY;
     yDayStart = y.slice();
     auxDayStart = auxRun.slice();
-    if (!keepAllDays) {
-      rec.reset();
-      record(dayStart, y, d);
-    }
-    const dayStates: Float64Array[] = [y.slice()];
+    const day = { t: [dayStart], states: [y.slice()] };
     let result;
     try {
-      result = integrate(system, y, dayStart, stops, { ...tolerances, initialStep: lastStep }, (t, state) => {
-        if (isOutput.has(t)) {
-          record(t, state, d);
-          if (!keepAllDays) dayStates.push(state.slice());
-        }
-        if (options.onProgress) options.onProgress((d + (t - dayStart) / SECONDS_PER_DAY) / totalDays);
-      });
+      result = integrate(
+        system,
+        y,
+        dayStart,
+        stops,
+        { ...tolerances, initialStep: lastStep },
+        (t) => options.onProgress?.((d + (t - dayStart) / SECONDS_PER_DAY) / totalDays),
+        {
+          instants: outputs,
+          onOutput: (t, state) => {
+            if (keepAllDays) record(t, state, d);
+            else {
+              day.t.push(t);
+              day.states.push(state.slice());
+            }
+          },
+        },
+      );
     } catch (e) {
       if (e instanceof IntegrationError) {
         throw new SimulationError(`the ${run.integrator} integrator failed on day ${d + 1} at ${clock.isoLocal(e.t)}: ${e.message}`);
@@ -135,19 +158,16 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     y = result.y.slice();
     lastStep = result.lastStep;
     for (let i = 0; i < AUX_SIZE; i++) auxRun[i] += result.auxIntegral[i]!;
-    stats.steps += result.stats.steps;
-    stats.rejected += result.stats.rejected;
-    stats.rhsEvaluations += result.stats.rhsEvaluations;
+    addStats(stats, result.stats);
     daysDone = d + 1;
-    if (run.length.kind === 'until-periodic') {
-      if (previousDay) {
-        const change = largestDailyChange(dayStates, previousDay);
-        changeByDay.push(change);
-        if (change < run.length.toleranceK) break;
-      }
-      previousDay = dayStates;
+    if (!keepAllDays) {
+      const change = previousDay ? largestDailyChange(day.states, previousDay.states) : Number.POSITIVE_INFINITY;
+      if (previousDay) changeByDay.push(change);
+      previousDay = day;
+      if (run.length.kind === 'until-periodic' && change < run.length.toleranceK) break;
     }
   }
+  if (!keepAllDays && previousDay) previousDay.t.forEach((t, k) => record(t, previousDay!.states[k]!, daysDone - 1));
   if (run.length.kind === 'until-periodic') {
     const last = changeByDay.length ? changeByDay[changeByDay.length - 1]! : Number.POSITIVE_INFINITY;
     periodic = {

@@ -73,6 +73,8 @@ export class StackWallSystem implements OdeSystem {
   private readonly capacity: Float64Array;
   private readonly innerSink: Float64Array; // −∂q'_in/∂T_0 per segment (≥ 0)
   private readonly outerSink: Float64Array; // ∂q'_out/∂T_N per segment (≥ 0, heat leaving)
+  private readonly convectionSink: Float64Array; // its convection part
+  private readonly radiationSink: Float64Array; // its radiation part
   /** Per segment, W per metre of height: from the gas into the wall, convection and radiation out, sun in. */
   private readonly flueToWall: Float64Array;
   private readonly convectionOut: Float64Array;
@@ -101,6 +103,8 @@ export class StackWallSystem implements OdeSystem {
     this.capacity = new Float64Array(this.n);
     this.innerSink = new Float64Array(geometry.segments);
     this.outerSink = new Float64Array(geometry.segments);
+    this.convectionSink = new Float64Array(geometry.segments);
+    this.radiationSink = new Float64Array(geometry.segments);
     this.flueToWall = new Float64Array(geometry.segments);
     this.convectionOut = new Float64Array(geometry.segments);
     this.radiationOut = new Float64Array(geometry.segments);
@@ -209,6 +213,8 @@ export class StackWallSystem implements OdeSystem {
       this.radiationOut[s] = outer.radiationPerMetre;
       this.sunIn[s] = outer.sunPerMetre;
       this.outerSink[s] = outer.sinkPerMetre;
+      this.convectionSink[s] = outer.convectionSinkPerMetre;
+      this.radiationSink[s] = outer.radiationSinkPerMetre;
 
       if (diag) {
         diag.gasInK[s] = gasIn;
@@ -232,6 +238,31 @@ export class StackWallSystem implements OdeSystem {
     }
     this.sinksT = t;
     this.sinksFingerprint = fingerprint(y);
+  }
+
+  /**
+   * First-order change of the whole-stack heat flows (aux channels, W) for a change `delta` of the
+   * state about the one of the last `rhs` call: the gas gives less to a warmer inner surface
+   * (−innerSink δT₀), convection and radiation take more from a warmer outer surface; the sun does
+   * not depend on the wall. (The effect of a segment's wall on the gas reaching the segments above
+   * is left out, as in the Jacobian.)
+   */
+  auxChange(delta: Float64Array, aux: Float64Array): void {
+    const n = this.n;
+    const dz = this.geometry.segmentLength;
+    let gas = 0;
+    let conv = 0;
+    let rad = 0;
+    for (let s = 0; s < this.geometry.segments; s++) {
+      const dInner = delta[s * n]!;
+      const dOuter = delta[s * n + n - 1]!;
+      gas -= this.innerSink[s]! * dInner;
+      conv += this.convectionSink[s]! * dOuter;
+      rad += this.radiationSink[s]! * dOuter;
+    }
+    aux[AUX_GAS_TO_WALL] += gas * dz;
+    aux[AUX_CONVECTION] += conv * dz;
+    aux[AUX_RADIATION] += rad * dz;
   }
 
   /**

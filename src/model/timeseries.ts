@@ -96,7 +96,18 @@ export interface RunResult {
   readonly periodic: { readonly reached: boolean; readonly lastChangeK: number; readonly toleranceK: number; readonly changeByDayK: readonly number[] } | null;
   /** Run time of firing start (warm-up studies). */
   readonly firingStartT: number | null;
-  readonly integrator: { readonly name: string; readonly steps: number; readonly rejected: number; readonly rhsEvaluations: number; readonly computeMs: number; readonly initialStateMs: number };
+  /** Solver counts over the whole run (steps, rejections, evaluations, Newton) and compute time. */
+  readonly integrator: {
+    readonly name: string;
+    readonly steps: number;
+    readonly rejected: number;
+    readonly rhsEvaluations: number;
+    readonly jacobianEvaluations: number;
+    readonly newtonIterations: number;
+    readonly newtonFailures: number;
+    readonly computeMs: number;
+    readonly initialStateMs: number;
+  };
   /** Warnings gathered during the run (validity ranges, clamped values). */
   readonly warnings: readonly string[];
 }

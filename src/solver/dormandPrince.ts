@@ -13,6 +13,9 @@
  * error norm as in TR-BDF2 (weighted RMS with atol + rtol · max(|y_n|, |y_{n+1}|)). Quadrature
  * channels use the fifth-order weights b. Stops and `lastStep` are handled as in TR-BDF2 (land
  * exactly, fresh f after each stop). Work arrays are allocated once per call.
+ *
+ * Dense output: the cubic Hermite interpolant through (y_n, f_n) and (y_{n+1}, f_{n+1}) (both
+ * derivatives are at hand: first same as last), error O(h⁴) — fine for this non-stiff reference.
  */
 import { IntegrationError } from './types.ts';
 import type { Integrator } from './types.ts';
@@ -68,7 +71,7 @@ const E7 = -1 / 40;
 const MAX_FACTOR = 5;
 const DEFAULT_MAX_STEPS = 1e6;
 
-export const integrateDormandPrince: Integrator = (system, y0, t0, stops, options, onStop) => {
+export const integrateDormandPrince: Integrator = (system, y0, t0, stops, options, onStop, dense) => {
   validateProblem('Dormand–Prince', system, y0, t0, stops, options);
   const n = system.size;
   const nAux = system.auxSize;
@@ -96,6 +99,10 @@ export const integrateDormandPrince: Integrator = (system, y0, t0, stops, option
   const q6 = new Float64Array(nAux);
   const q7 = new Float64Array(nAux);
   const auxIntegral = new Float64Array(nAux);
+  const yOut = new Float64Array(n);
+  const outputs = dense?.instants ?? [];
+  let nextOutput = 0;
+  while (nextOutput < outputs.length && outputs[nextOutput]! <= t0) nextOutput++;
 
   let nonFinite = '';
   const rhs = (t: number, state: Float64Array, dydt: Float64Array, aux: Float64Array): boolean => {
@@ -160,6 +167,21 @@ export const integrateDormandPrince: Integrator = (system, y0, t0, stops, option
       if (err <= 1) {
         for (let j = 0; j < nAux; j++) {
           auxIntegral[j] += hStep * (B1 * q1[j] + B3 * q3[j] + B4 * q4[j] + B5 * q5[j] + B6 * q6[j]);
+        }
+        // dense output for the instants inside (t, tNew]: cubic Hermite in θ = (t_out − t)/h
+        while (nextOutput < outputs.length && outputs[nextOutput]! <= tNew) {
+          const tOut = outputs[nextOutput]!;
+          if (tOut === tNew) dense!.onOutput(tOut, yNew);
+          else {
+            const th = (tOut - t) / hStep;
+            const h00 = (1 + 2 * th) * (1 - th) * (1 - th);
+            const h10 = th * (1 - th) * (1 - th);
+            const h01 = th * th * (3 - 2 * th);
+            const h11 = th * th * (th - 1);
+            for (let i = 0; i < n; i++) yOut[i] = h00 * y[i] + hStep * h10 * k1[i] + h01 * yNew[i] + hStep * h11 * k7[i];
+            dense!.onOutput(tOut, yOut);
+          }
+          nextOutput++;
         }
         t = tNew;
         y.set(yNew);

@@ -12,6 +12,7 @@ export { integrateTrBdf2 } from './trbdf2.ts';
 export { solveTridiagonal } from './tridiagonal.ts';
 export { IntegrationError } from './types.ts';
 export type {
+  DenseOutput,
   IntegrationResult,
   Integrator,
   IntegratorOptions,

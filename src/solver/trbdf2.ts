@@ -25,8 +25,18 @@
  * every attempt (O(N)). Convergence: the correction δ computed from a fresh rhs evaluation has
  * ‖δ‖ · max(1, θ/(1 − θ)) ≤ 0.05 in the weighted RMS norm, θ the measured contraction rate (from
  * the previous stage for the first correction); θ > 0.9 or six evaluations without convergence
- * is a failure. The quadrature rates of that last evaluation are used for the stage, so the aux
- * channels agree with the solution to within the Newton tolerance.
+ * is a failure. The quadrature rates of that last evaluation, moved to the corrected state by the
+ * system's `auxChange` where it has one (first order in the last correction), are used for the
+ * stage: the integrated flows are those of the accepted state.
+ *
+ * Dense output: within an accepted step the solution is the cubic Hermite interpolant through
+ * (y_n, f_n) and (y_{n+1}, f_{n+1}) in θ = (t − t_n)/h, with the consistent stage derivatives
+ * (f_{n+1} = (y_{n+1} − ψ)/(hd)): error O(h⁴), one order above the step's own local error. In the
+ * first step after a start or a stop, where f_n is a fresh evaluation that may sit on a stiff
+ * transient (a step of the forcing), the derivative at the start is not used: the quadratic
+ * through y_n and (y_{n+1}, f_{n+1}) instead (error O(h³)), so a transient the step damps is not
+ * overshot. At θ = 1 both return y_{n+1} exactly. (The trapezoidal stage value is not used: the
+ * trapezoidal rule is not L-stable and its stage carries stiff errors.)
  *
  * Stops: the step is shortened (or the remaining distance split in two equal steps) to land on
  * each stop exactly; f(t, y) is evaluated afresh after each stop, so the caller may change the
@@ -87,7 +97,30 @@ const DEFAULT_MAX_STEPS = 1e6;
 const Newton = { Converged: 0, Failed: 1, NonFinite: 2 } as const;
 type NewtonOutcome = (typeof Newton)[keyof typeof Newton];
 
-export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onStop) => {
+/**
+ * The dense-output value at θ ∈ (0, 1) of a step of size h from (y0, f0) to (y1, f1) into `out`:
+ * cubic Hermite, or (withoutStartSlope) the quadratic p = y0 + θ(y1 − y0) + θ(θ − 1)(h f1 − (y1 − y0)),
+ * which matches y0, y1 and the end slope.
+ */
+function interpolate(theta: number, h: number, y0: Float64Array, f0: Float64Array, y1: Float64Array, f1: Float64Array, withoutStartSlope: boolean, out: Float64Array): void {
+  const n = out.length;
+  if (withoutStartSlope) {
+    const c = theta * (theta - 1);
+    for (let i = 0; i < n; i++) {
+      const dy = y1[i] - y0[i];
+      out[i] = y0[i] + theta * dy + c * (h * f1[i] - dy);
+    }
+    return;
+  }
+  const u = 1 - theta;
+  const h00 = (1 + 2 * theta) * u * u;
+  const h10 = theta * u * u * h;
+  const h01 = theta * theta * (3 - 2 * theta);
+  const h11 = theta * theta * (theta - 1) * h;
+  for (let i = 0; i < n; i++) out[i] = h00 * y0[i] + h10 * f0[i] + h01 * y1[i] + h11 * f1[i];
+}
+
+export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onStop, dense) => {
   validateProblem('TR-BDF2', system, y0, t0, stops, options);
   const jacobian = system.jacobian;
   if (!jacobian) {
@@ -124,6 +157,11 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
   const a3 = new Float64Array(nAux);
   const az = new Float64Array(nAux);
   const auxIntegral = new Float64Array(nAux);
+  const yOut = new Float64Array(n);
+  let freshStart = true; // f1 is a fresh evaluation after a start or a stop (see the dense output)
+  const outputs = dense?.instants ?? [];
+  let nextOutput = 0;
+  while (nextOutput < outputs.length && outputs[nextOutput]! <= t0) nextOutput++;
 
   let nonFinite = ''; // description of the last non-finite rhs value met in a trial stage
   let stageEvaluations = 0; // rhs evaluations used by the last stage
@@ -161,10 +199,12 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
       }
       for (let i = 0; i < n; i++) z[i] += delta[i];
       // Error left after this correction ≈ rate/(1 − rate) · norm for a linearly converging
-      // iteration; never credited below the correction itself (the aux rates lag by one).
+      // iteration; never credited below the correction itself.
       if (norm * Math.max(1, newtonRate / (1 - newtonRate)) <= NEWTON_TOLERANCE) {
         const inverseHd = 1 / hd;
         for (let i = 0; i < n; i++) fStage[i] = (z[i] - psi[i]) * inverseHd;
+        // the rates of the corrected (accepted) stage value, not of the iterate before the correction
+        system.auxChange?.(delta, az);
         aStage.set(az);
         return Newton.Converged;
       }
@@ -186,6 +226,7 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
   for (let s = 0; s < stops.length; s++) {
     const stop = stops[s];
     if (s > 0 && !rhs(t, y, f1, a1)) throw new IntegrationError(`TR-BDF2: ${nonFinite}`, t);
+    freshStart = true;
     let previousRejected = false;
     while (t < stop) {
       if (stats.steps + stats.rejected + stats.newtonFailures >= maxSteps) {
@@ -249,10 +290,21 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
         for (let j = 0; j < nAux; j++) {
           auxIntegral[j] += hStep * (W * (a1[j] + a2[j]) + D * a3[j]);
         }
+        // dense output for the instants inside (t, tNew]
+        while (nextOutput < outputs.length && outputs[nextOutput]! <= tNew) {
+          const tOut = outputs[nextOutput]!;
+          if (tOut === tNew) dense!.onOutput(tOut, z);
+          else {
+            interpolate((tOut - t) / hStep, hStep, y, f1, z, f3, freshStart, yOut);
+            dense!.onOutput(tOut, yOut);
+          }
+          nextOutput++;
+        }
         t = tNew;
         y.set(z);
         f1.set(f3);
         a1.set(a3);
+        freshStart = false;
         stats.steps++;
         jacobianAtCurrentState = false;
         const factor = Math.min(previousRejected ? 1 : MAX_FACTOR, controllerFactor(err, 3));

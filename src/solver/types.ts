@@ -22,6 +22,21 @@ export interface OdeSystem {
    * Required by the implicit integrator; ignored by explicit ones.
    */
   jacobian?(t: number, y: Float64Array, lower: Float64Array, diag: Float64Array, upper: Float64Array): void;
+  /**
+   * Optional: add to `aux` the first-order change of the quadrature rates for a state change `delta`
+   * about the state of the last `rhs` call. The implicit integrator uses it after the last Newton
+   * correction of a stage, so that the rates it integrates are those of the accepted state (not of
+   * the iterate before the correction) without another rhs evaluation.
+   */
+  auxChange?(delta: Float64Array, aux: Float64Array): void;
+}
+
+/** Values of the solution wanted between steps, filled by the integrator's own interpolant. */
+export interface DenseOutput {
+  /** Instants, strictly increasing, each after t0 and not after the last stop. */
+  readonly instants: readonly number[];
+  /** Called once per instant, in order, with a view valid only during the call (copy what you keep). */
+  readonly onOutput: (t: number, y: Float64Array) => void;
 }
 
 export interface IntegratorOptions {
@@ -59,7 +74,9 @@ export interface IntegrationResult {
 /**
  * Integrate from t0 through each of `stops` (strictly increasing, all > t0), landing exactly on
  * every stop. At each stop `onStop(t, y, auxIntegral)` is called with views valid only during the
- * call (copy what you keep). Throws `IntegrationError` on failure (step size underflow, NaN, too
+ * call (copy what you keep). Stops are for discontinuities of the forcing (and for where the caller
+ * must have the exact state); values at other instants come from `dense`, by interpolation within
+ * the accepted steps, so they do not shorten the steps. Throws `IntegrationError` on failure (step size underflow, NaN, too
  * many steps) with a message a user can act on.
  */
 export type Integrator = (
@@ -69,6 +86,7 @@ export type Integrator = (
   stops: readonly number[],
   options: IntegratorOptions,
   onStop?: (t: number, y: Float64Array, auxIntegral: Float64Array) => void,
+  dense?: DenseOutput,
 ) => IntegrationResult;
 
 export class IntegrationError extends Error {

@@ -106,6 +106,9 @@ export interface OuterBoundaryOfSegment {
   sunPerMetre: number;
   /** ∂(convection + radiation)/∂T_surface, W/(m K), with the film coefficient held (for the Jacobian). */
   sinkPerMetre: number;
+  /** The two parts of `sinkPerMetre`: h P and 4 ε σ T_s³ P (with its view factors). */
+  convectionSinkPerMetre: number;
+  radiationSinkPerMetre: number;
   /** Outside film coefficient, W/(m² K). */
   filmCoefficient: number;
   /** Reynolds number on the outer diameter, Rayleigh number on the height, Grashof number on the height and film Prandtl number (NaN with a fixed film coefficient). */
@@ -118,7 +121,7 @@ export interface OuterBoundaryOfSegment {
 }
 
 export function emptyOuterBoundary(): OuterBoundaryOfSegment {
-  return { convectionPerMetre: 0, radiationPerMetre: 0, sunPerMetre: 0, sinkPerMetre: 0, filmCoefficient: 0, reynolds: Number.NaN, rayleigh: Number.NaN, grashof: Number.NaN, prandtl: Number.NaN, slenderCorrected: false };
+  return { convectionPerMetre: 0, radiationPerMetre: 0, sunPerMetre: 0, sinkPerMetre: 0, convectionSinkPerMetre: 0, radiationSinkPerMetre: 0, filmCoefficient: 0, reynolds: Number.NaN, rayleigh: Number.NaN, grashof: Number.NaN, prandtl: Number.NaN, slenderCorrected: false };
 }
 
 /**
@@ -162,6 +165,8 @@ export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number,
   out.radiationPerMetre = radiation;
   out.sunPerMetre = c.sunPerMetre;
   out.sinkPerMetre = h * perimeter + radiationSink;
+  out.convectionSinkPerMetre = h * perimeter;
+  out.radiationSinkPerMetre = radiationSink;
   out.filmCoefficient = h;
   return out;
 }
