@@ -26,9 +26,13 @@ import { STANDARD_GRAVITY } from '../constants.ts';
  * Example 7.4, from memory): air at T_f = 350 K, Pr = 0.700, Re = 6071 → Nu_D ≈ 40.6.
  */
 export function nuCylinderChurchillBernstein(re: number, pr: number): number {
-  const laminarPart =
-    (0.62 * Math.sqrt(re) * Math.cbrt(pr)) / Math.pow(1 + Math.pow(0.4 / pr, 2 / 3), 0.25);
-  const turbulentFactor = Math.pow(1 + Math.pow(re / 282000, 5 / 8), 4 / 5);
+  // Rational powers as roots and products (hot path; equal to Math.pow within a few ulp):
+  // x^(2/3) = cbrt(x)², y^(1/4) = √√y, x^(5/8) = √x · x^(1/8).
+  const c = Math.cbrt(0.4 / pr);
+  const laminarPart = (0.62 * Math.sqrt(re) * Math.cbrt(pr)) / Math.sqrt(Math.sqrt(1 + c * c));
+  const x = re / 282000;
+  const rootX = Math.sqrt(x);
+  const turbulentFactor = Math.pow(1 + rootX * Math.sqrt(Math.sqrt(rootX)), 4 / 5);
   return 0.3 + laminarPart * turbulentFactor;
 }
 
@@ -51,8 +55,15 @@ export function nuCylinderChurchillBernstein(re: number, pr: number): number {
  * Pr = 0.690 → Nu_L ≈ 147.
  */
 export function nuVerticalPlateChurchillChu(ra: number, pr: number): number {
-  const prandtlFunction = Math.pow(1 + Math.pow(0.492 / pr, 9 / 16), 8 / 27);
-  const root = 0.825 + (0.387 * Math.pow(ra, 1 / 6)) / prandtlFunction;
+  // Rational powers as roots and products (hot path; equal to Math.pow within a few ulp):
+  // x^(9/16) = √x · x^(1/16), y^(8/27) = (y^(1/27))⁸, Ra^(1/6) = √∛Ra.
+  const x = 0.492 / pr;
+  const x16 = Math.sqrt(Math.sqrt(Math.sqrt(Math.sqrt(x))));
+  const y27 = Math.cbrt(Math.cbrt(Math.cbrt(1 + Math.sqrt(x) * x16)));
+  const y2 = y27 * y27;
+  const y4 = y2 * y2;
+  const prandtlFunction = y4 * y4;
+  const root = 0.825 + (0.387 * Math.sqrt(Math.cbrt(ra))) / prandtlFunction;
   return root * root;
 }
 
@@ -75,7 +86,7 @@ export function isSlenderVerticalCylinder(
   height: number,
   grashofHeight: number,
 ): boolean {
-  return diameter / height < 35 / Math.pow(grashofHeight, 0.25);
+  return diameter / height < 35 / Math.sqrt(Math.sqrt(grashofHeight));
 }
 
 /**
@@ -106,7 +117,7 @@ export function slenderCylinderFactorPopiel(
 ): number {
   const b = 0.0571322 + 0.20305 * Math.pow(pr, -0.43);
   const c = 0.9165 - 0.0043 * Math.sqrt(pr) + 0.01333 * Math.log(pr) + 0.0004809 / pr;
-  const x = (Math.sqrt(32) * Math.pow(grashofHeight, -0.25) * height) / diameter;
+  const x = (Math.sqrt(32) * height) / (Math.sqrt(Math.sqrt(grashofHeight)) * diameter);
   return 1 + b * Math.pow(x, c);
 }
 
@@ -125,6 +136,8 @@ export function nuMixedChurchill(nuForced: number, nuNatural: number, exponent =
   // Exact when one mechanism is absent (avoids the round-off of (x^n)^(1/n)).
   if (nuNatural === 0) return nuForced;
   if (nuForced === 0) return nuNatural;
+  // n = 3 (the default and the hot path): cubes and a cube root instead of Math.pow.
+  if (exponent === 3) return Math.cbrt(nuForced * nuForced * nuForced + nuNatural * nuNatural * nuNatural);
   return Math.pow(Math.pow(nuForced, exponent) + Math.pow(nuNatural, exponent), 1 / exponent);
 }
 
@@ -234,7 +247,7 @@ export function outsideFilmCoefficient(
   const deltaT = Math.abs(surfaceTemperatureK - airTemperatureK);
   const nu = air.kinematicViscosity;
   const re = (Math.abs(windSpeed) * outerDiameter) / nu;
-  const grashof = (STANDARD_GRAVITY * air.expansion * deltaT * stackHeight ** 3) / (nu * nu);
+  const grashof = (STANDARD_GRAVITY * air.expansion * deltaT * stackHeight * stackHeight * stackHeight) / (nu * nu);
   const ra = grashof * air.prandtl;
 
   const hasWind = re > 0;

@@ -4,7 +4,10 @@
  * Pure functions of dimensionless groups. Characteristic length: the inner diameter of the flue
  * (Re = ṁ D / (A μ) = 4 ṁ / (π D μ), Nu = h D / k). Gas properties at the BULK (mixing-cup)
  * temperature of the gas in the segment (docs/model.md "Flue side"); the caller supplies them.
+ * Natural convection on the lining and its combination with the forced flow are at the end.
  */
+import { STANDARD_GRAVITY } from '../constants.ts';
+import { nuVerticalPlateChurchillChu } from './external.ts';
 
 /**
  * Darcy friction factor of a smooth tube, Petukhov (1970) / Filonenko (1954):
@@ -88,4 +91,144 @@ export function nuPipeBlended(re: number, pr: number): number {
   if (re >= RE_TURBULENT_LIMIT) return nuPipeGnielinski(re, pr);
   const gamma = (re - RE_LAMINAR_LIMIT) / (RE_TURBULENT_LIMIT - RE_LAMINAR_LIMIT);
   return (1 - gamma) * NU_PIPE_LAMINAR_CONSTANT_WALL + gamma * nuPipeGnielinski(RE_TURBULENT_LIMIT, pr);
+}
+
+/** Gas properties at the film temperature (T_wall + T_gas)/2, SI (a `GasProperties` fits). */
+export interface LiningFilmGas {
+  /** Density, kg/m³. */
+  readonly density: number;
+  /** Thermal conductivity, W/(m K). */
+  readonly conductivity: number;
+  /** Dynamic viscosity, Pa s. */
+  readonly dynamicViscosity: number;
+  /** Prandtl number, –. */
+  readonly prandtl: number;
+}
+
+/** Natural-convection film on the flue lining: coefficient and the groups behind it. */
+export interface LiningNaturalConvection {
+  /** Film coefficient, W/(m² K) (0 when wall and gas are at the same temperature). */
+  readonly h: number;
+  /** Rayleigh number on the height, g β |ΔT| L³ Pr / ν². */
+  readonly rayleigh: number;
+  /** Nusselt number on the height, h L / k (0 with no temperature difference). */
+  readonly nusselt: number;
+}
+
+/**
+ * Validity of {@link naturalConvectionLiningCoefficient} (Churchill–Chu vertical plate), for the
+ * correlation table.
+ */
+export const LINING_NATURAL_CONVECTION_RANGE = {
+  rayleigh: [0.1, 1e12],
+  prandtl: [0, Infinity],
+  source:
+    'Churchill & Chu, Int. J. Heat Mass Transfer 18 (1975) 1323–1329, doi:10.1016/0017-9310(75)90243-4; ' +
+    'range 0.1 ≤ Ra_L ≤ 1e12 as quoted by Incropera & DeWitt (from memory)',
+  extrapolation:
+    'Above Ra_L = 1e12 (any lining taller than about 10 m at ΔT of tens of K): accepted in common practice. ' +
+    'The turbulent branch of the correlation tends to Nu ∝ Ra^(1/3), which makes h independent of the height, ' +
+    'the behaviour of turbulent free-convection data on tall plates; the value is flagged, not refused. ' +
+    'Below 0.1: not reached by any flue.',
+} as const;
+
+/**
+ * Natural-convection film coefficient of the flue lining, from the vertical-plate correlation of
+ * Churchill & Chu (1975) ({@link nuVerticalPlateChurchillChu}) at the gas–wall temperature
+ * difference:
+ *
+ *   Ra_L = g β |T_w − T_g| L³ Pr / ν²,  β = 1/T_f,  ν = μ/ρ,  T_f = (T_w + T_g)/2
+ *   h = Nu_CC(Ra_L, Pr) k / L
+ *
+ * - Length L: the HEIGHT OF THE STACK (the lining height), not the segment's. The boundary layer
+ *   grows along the whole continuous lining from the flue inlet, as on the outside surface
+ *   (`outsideFilmCoefficient` uses the stack height for the same reason). The choice matters
+ *   little: a lining of a few metres or more is turbulent (Ra_L > 1e9), where the correlation tends
+ *   to Nu ∝ Ra^(1/3) and h to a value independent of L (60 m against a 5 m segment: 3.61 against
+ *   3.80 W/(m² K) in the example below, 5 %).
+ * - Properties at the film temperature (`gas`), β of an ideal gas. Sign of ΔT does not matter: a
+ *   wall warmer than the gas drives an upward boundary layer, a colder one a downward layer.
+ * - Equal temperatures: h = 0 exactly (no buoyancy; the forced value then stands alone).
+ * - Not included: the confinement of the boundary layer by the duct (its thickness stays well
+ *   below the radius of a flue of a metre or more), and variation of ΔT along the height (the
+ *   local ΔT of the segment is used with the whole height, common practice).
+ * - Range data: {@link LINING_NATURAL_CONVECTION_RANGE}.
+ *
+ * Example: wall 150 °C, gas 200 °C, L = 60 m, air at T_f = 448.15 K (Incropera Table A.4:
+ * k = 0.037170, μ = 2.49938e-5, ρ = 0.787632 at 1 atm, Pr = 0.686355) → ν = 3.17328e-5,
+ * Ra_L = 1.6108e14, Nu = 5822.8, h = 3.607 W/(m² K) — about ten times the 0.377 W/(m² K) of the
+ * forced flow of 0.15 kg/s in a 1.4 m flue.
+ */
+export function naturalConvectionLiningCoefficient(
+  wallTemperatureK: number,
+  gasTemperatureK: number,
+  height: number,
+  gas: LiningFilmGas,
+): LiningNaturalConvection {
+  const deltaT = Math.abs(wallTemperatureK - gasTemperatureK);
+  if (deltaT === 0) return { h: 0, rayleigh: 0, nusselt: 0 };
+  const filmK = 0.5 * (wallTemperatureK + gasTemperatureK);
+  const nu = gas.dynamicViscosity / gas.density;
+  const rayleigh = (STANDARD_GRAVITY * deltaT * height * height * height * gas.prandtl) / (filmK * nu * nu);
+  const nusselt = nuVerticalPlateChurchillChu(rayleigh, gas.prandtl);
+  return { h: (nusselt * gas.conductivity) / height, rayleigh, nusselt };
+}
+
+/**
+ * Whether buoyancy at the lining AIDS the upward flue flow: true when the wall is warmer than the
+ * gas (the heated boundary layer rises with the flow, e.g. a warm lining at idle), false when the
+ * gas is warmer (the cooled layer sinks against the flow, e.g. under firing).
+ */
+export function isBuoyancyAidingUpwardFlow(wallTemperatureK: number, gasTemperatureK: number): boolean {
+  return wallTemperatureK > gasTemperatureK;
+}
+
+/**
+ * Validity and stance of {@link mixedConvectionChurchill}, for the correlation table.
+ */
+export const MIXED_CONVECTION_RANGE = {
+  forced: [0, Infinity],
+  natural: [0, Infinity],
+  source:
+    'Churchill, AIChE J. 23 (1977) 10–16 (aiding flow, exponent 3); minus sign for opposing flow as in ' +
+    'Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, section 9.9 (from memory)',
+  extrapolation:
+    'Aiding flow: accepted over the whole range (the form is an interpolation between two limits). ' +
+    'Opposing flow: the minus sign is the textbook rule for laminar boundary layers; it falls to 0 where ' +
+    'the two parts are equal, whereas measured heat transfer passes through a finite minimum (separation), ' +
+    'and in TURBULENT pipe flow opposing buoyancy raises heat transfer rather than lowering it (Jackson, ' +
+    'Cotton & Axcell, Int. J. Heat Fluid Flow 10 (1989) 2–15, from memory). Flag opposing flow with ' +
+    'turbulent forced flow (Re > 2300) as outside the rule.',
+} as const;
+
+/**
+ * Mixed forced and natural convection, Churchill's combination with the sign of the buoyancy:
+ *
+ *   aiding:    X = (X_F³ + X_N³)^(1/3)
+ *   opposing:  X = |X_F³ − X_N³|^(1/3)
+ *
+ * X is a Nusselt number on a common length or a film coefficient (combine film coefficients when
+ * the two lengths differ, as here: the forced flow's diameter and the lining's height).
+ * - Aiding: never below the larger part; equals the other part exactly when one is 0.
+ * - Opposing: below the larger part by construction; the absolute value makes the weaker
+ *   mechanism reduce the stronger whichever it is; never negative, never NaN for finite inputs
+ *   ≥ 0. It reaches 0 where the parts are equal, which real flows do not (see
+ *   {@link MIXED_CONVECTION_RANGE}): the caller decides whether to accept that near-cancellation
+ *   or to floor it.
+ * - Source: S. W. Churchill, "A comprehensive correlating equation for laminar, assisting, forced
+ *   and free convection", AIChE J. 23 (1977) 10–16, doi:10.1002/aic.690230103 (aiding form,
+ *   exponent 3); opposing form as in Incropera & DeWitt §9.9 (from memory).
+ *
+ * Example (1.4 m flue, gas 200 °C, lining 150 °C, h_N = 3.607 W/(m² K)): idle 0.15 kg/s,
+ * h_F = 0.377 → aiding 3.608, opposing 3.606; full fire 3.2 kg/s, h_F = 5.347 → aiding 5.846,
+ * opposing 4.732 W/(m² K).
+ */
+export function mixedConvectionChurchill(forced: number, natural: number, aiding: boolean): number {
+  if (natural === 0) return forced;
+  if (forced === 0) return natural;
+  // Scaled by the larger part so that cubes neither underflow nor overflow.
+  const larger = Math.max(forced, natural);
+  const r = Math.min(forced, natural) / larger;
+  const r3 = r * r * r;
+  return larger * Math.cbrt(aiding ? 1 + r3 : 1 - r3);
 }

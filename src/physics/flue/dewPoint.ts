@@ -8,9 +8,13 @@ import { celsiusToKelvin, STANDARD_PRESSURE } from '../constants.ts';
 /** Pascals per mmHg (torr): 101325/760, exact by definition of the standard atmosphere. */
 export const PA_PER_MMHG = STANDARD_PRESSURE / 760;
 
-/** IAPWS-IF97 region 4 coefficients n1…n10 (IAPWS R7-97(2012), Table 34). */
+/**
+ * IAPWS-IF97 region 4 coefficients n1…n10 (IAPWS R7-97(2012), Table 34). n2 = −0.72421316703206e6:
+ * with these values eqs. 30 and 31 reproduce the release's check values (Tables 35 and 36) to all
+ * nine printed digits (see test/physics/flue/dewPoint.test.ts).
+ */
 const N = [
-  0, 0.11670521452767e4, -0.72421316598842e6, -0.17073846940092e2, 0.12020824702470e5, -0.32325550322333e7,
+  0, 0.11670521452767e4, -0.72421316703206e6, -0.17073846940092e2, 0.12020824702470e5, -0.32325550322333e7,
   0.14915108613530e2, -0.48232657361591e4, 0.40511340542057e6, -0.23855557567849, 0.65017534844798e3,
 ] as const;
 

@@ -157,15 +157,23 @@ const concrete: Material = {
   // 1.4 W/(m K) at 300 K from Incropera Table A.3 (stone mix); the fall with T follows the shape of
   // the EN 1992-1-2 lower-limit curve (scaled to 1.4 at 300 K), from memory.
   conductivity: table([[300, 1.4], [473, 1.17], [673, 0.95], [873, 0.79]]),
-  // 880 at 300 K (Incropera Table A.3); dry-concrete cp rise per EN 1992-1-2 (1000, 1050, 1100), from memory.
-  specificHeat: table([[300, 880], [473, 1000], [673, 1050], [873, 1100]]),
+  // 880 at 300 K (Incropera Table A.3); from 100 °C upward the dry-concrete (u = 0 %) curve of
+  // EN 1992-1-2:2004, clause 3.3.2(1), eq. (3.9), from memory: cp = 900 J/(kg K) for 20–100 °C,
+  // 900 + (θ − 100) for 100–200 °C, 1000 + (θ − 200)/2 for 200–400 °C, 1100 for 400–1200 °C.
+  // That curve is piecewise linear with corners at 100, 200 and 400 °C, so these points reproduce
+  // it exactly from 100 to 1200 °C (held at 1100 above). Between 300 K and 100 °C the table rises
+  // from the handbook's room-temperature 880 to the standard's 900 (within 2.3 % of EN there).
+  // The moisture peak of EN 3.3.2(2) (up to 2020 J/(kg K) at 100–115 °C for 3 % water) is not
+  // included: a stack's concrete dries out in service.
+  specificHeat: table([[300, 880], [373.15, 900], [473.15, 1000], [673.15, 1100]]),
   emissivity: 0.9, // concrete, Incropera Table A.11 (0.88–0.93), from memory
   maxServiceTemperatureK: 573.15, // 300 °C: strength loss of structural concrete, common practice
   youngsModulus: 30e9,
   thermalExpansion: 10e-6,
   poissonRatio: 0.2,
   source:
-    'Incropera & DeWitt, Table A.3 (concrete, stone mix) at 300 K, from memory; trend with T after EN 1992-1-2, from memory; ' +
+    'Incropera & DeWitt, Table A.3 (concrete, stone mix) at 300 K, from memory; k trend with T after EN 1992-1-2 clause 3.3.3 (lower limit), ' +
+    'cp from 100 °C up per EN 1992-1-2 clause 3.3.2(1) eq. (3.9), dry concrete, from memory; ' +
     'service limit and mechanical values common practice',
 };
 

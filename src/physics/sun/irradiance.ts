@@ -55,6 +55,146 @@ export function clearSkyAshrae(month: number, altitudeDeg: number): Irradiance {
 }
 
 /**
+ * Day of the year (non-leap calendar, 1 = 1 January) of the 21st of each month: the days the
+ * ASHRAE monthly constants of {@link ASHRAE_CLEAR_SKY} were computed for.
+ */
+export const ASHRAE_REFERENCE_DAYS = [21, 52, 80, 111, 141, 172, 202, 233, 264, 294, 325, 355] as const;
+
+/** A, B, C of the ASHRAE clear-sky model on one day. */
+export interface AshraeClearSkyConstants {
+  /** Apparent extraterrestrial irradiance, W/m². */
+  readonly A: number;
+  /** Atmospheric extinction coefficient, –. */
+  readonly B: number;
+  /** Diffuse sky factor, –. */
+  readonly C: number;
+}
+
+/**
+ * The ASHRAE monthly constants on any day of the year, linear in the day between the 21st-of-month
+ * days they were published for ({@link ASHRAE_REFERENCE_DAYS}); from 21 December to 21 January
+ * across the new year. Removes the steps of {@link clearSkyAshrae} on the 1st of each month (beam
+ * at 30° altitude fell 8.7 % from 31 March to 1 April); on each 21st it returns the table exactly.
+ *
+ * `dayOfYear`: 1 = 1 January 00:00 local solar time, fractional days allowed; taken modulo 365
+ * (a leap year's 31 December reads as 1 January, a shift of one day's change). Interpolating the
+ * tabulated constants is an adaptation made here (stated as such), not part of the ASHRAE method.
+ *
+ * Example: day 90.5 (31 March, noon) lies 10.5/31 of the way from 21 March (day 80: A 1186,
+ * B 0.156, C 0.071) to 21 April (day 111: 1136, 0.180, 0.097) → A = 1169.06, B = 0.16413,
+ * C = 0.079806.
+ */
+export function ashraeClearSkyConstantsOnDay(dayOfYear: number): AshraeClearSkyConstants {
+  if (!Number.isFinite(dayOfYear)) throw new RangeError(`day of year ${dayOfYear} is not a finite number`);
+  const days = ASHRAE_REFERENCE_DAYS;
+  let d = ((((dayOfYear - 1) % 365) + 365) % 365) + 1; // 1 ≤ d < 366
+  let i = days.length - 1; // interval [days[i], days[i + 1]); the last one wraps to next January
+  for (let k = 0; k < days.length - 1; k++) {
+    if (d >= days[k] && d < days[k + 1]) i = k;
+  }
+  if (d < days[0]) d += 365;
+  const j = (i + 1) % 12;
+  const from = days[i];
+  const to = j === 0 ? days[0] + 365 : days[j];
+  const f = (d - from) / (to - from);
+  const { A, B, C } = ASHRAE_CLEAR_SKY;
+  return { A: A[i] + f * (A[j] - A[i]), B: B[i] + f * (B[j] - B[i]), C: C[i] + f * (C[j] - C[i]) };
+}
+
+/**
+ * ASHRAE clear-sky model (as {@link clearSkyAshrae}) with the constants of
+ * {@link ashraeClearSkyConstantsOnDay}: continuous from day to day. Zero with the sun at or below
+ * the horizon. Example: 21 June (day 172), h = 60° → the June value of clearSkyAshrae, 858.7 W/m².
+ */
+export function clearSkyAshraeOnDay(dayOfYear: number, altitudeDeg: number): Irradiance {
+  const { A, B, C } = ashraeClearSkyConstantsOnDay(dayOfYear);
+  if (!(altitudeDeg > 0)) return { beamNormal: 0, diffuseHorizontal: 0 };
+  const beamNormal = A * Math.exp(-B / Math.sin(altitudeDeg * DEG));
+  return { beamNormal, diffuseHorizontal: C * beamNormal };
+}
+
+/**
+ * Day of the year (1 = 1 January 00:00, fractional) at the site by local mean solar time (UTC
+ * shifted by longitude/15 h), for {@link ashraeClearSkyConstantsOnDay} and the 2009 model.
+ */
+export function solarDayOfYear(utcMs: number, longitudeDeg: number): number {
+  const local = new Date(utcMs + (longitudeDeg / 15) * 3_600_000);
+  const startOfYear = Date.UTC(local.getUTCFullYear(), 0, 1);
+  return 1 + (local.getTime() - startOfYear) / 86_400_000;
+}
+
+/**
+ * Solar constant of the ASHRAE 2009 clear-sky model, W/m²: the value its tabulated optical depths
+ * were derived with (ASHRAE Fundamentals 2009, ch. 14; from memory). Not the physical best estimate
+ * (SOLAR_CONSTANT, 1361 W/m²): using that here would bias the model by −0.4 %.
+ */
+export const ASHRAE_2009_SOLAR_CONSTANT = 1367;
+
+/**
+ * Extraterrestrial normal irradiance on day n, ASHRAE Fundamentals (2009), ch. 14, eq. 4:
+ *   E₀ = E_sc [1 + 0.033 cos(360° (n − 3)/365)],  E_sc = 1367 W/m²  (from memory).
+ * Example: n = 172 → 1367·(1 + 0.033·cos(166.68°)) = 1323.10 W/m².
+ */
+export function extraterrestrialIrradianceAshrae2009(dayOfYear: number): number {
+  return ASHRAE_2009_SOLAR_CONSTANT * (1 + 0.033 * Math.cos((2 * Math.PI * (dayOfYear - 3)) / 365));
+}
+
+/**
+ * Relative optical air mass, Kasten & Young (1989):
+ *   m = 1 / [sin h + 0.50572 (6.07995 + h)^(−1.6364)],   h = sun altitude in degrees
+ * Valid down to the horizon (m(0°) = 37.92). Source: F. Kasten, A. T. Young, "Revised optical air
+ * mass tables and approximation formula", Applied Optics 28 (1989) 4735–4738,
+ * doi:10.1364/AO.28.004735. Example: h = 30° → 1.99429; zenith → 0.99971.
+ */
+export function airMassKastenYoung(altitudeDeg: number): number {
+  return 1 / (Math.sin(altitudeDeg * DEG) + 0.50572 * Math.pow(6.07995 + altitudeDeg, -1.6364));
+}
+
+/**
+ * Validity and stance of {@link clearSkyAshrae2009}, for the correlation table. The optical depths
+ * are the monthly τ_b, τ_d of the site from the ASHRAE design-climate tables (typical ranges in
+ * those tables about 0.2–0.8 for τ_b and 1.4–3.0 for τ_d; from memory).
+ */
+export const ASHRAE_2009_CLEAR_SKY_RANGE = {
+  tauBeam: [0.2, 0.8],
+  tauDiffuse: [1.4, 3.0],
+  altitudeDeg: [0, 90],
+  source:
+    'ASHRAE Handbook of Fundamentals (2009), ch. 14 "Climatic design information", eqs. 15–19 (from memory); ' +
+    'air mass: Kasten & Young, Applied Optics 28 (1989) 4735, doi:10.1364/AO.28.004735',
+  extrapolation:
+    'τ outside the tabulated ranges: flagged (the exponents ab, ad were fitted over the tabulated stations). ' +
+    'The 2013 and later editions refitted ab and ad (different coefficients): use the formulas of the edition ' +
+    'whose τ values are entered.',
+} as const;
+
+/**
+ * ASHRAE 2009 clear-sky model with the site's monthly beam and diffuse optical depths τ_b, τ_d
+ * (ASHRAE Fundamentals 2009, ch. 14, eqs. 15–19; from memory):
+ *
+ *   E_b = E₀ exp(−τ_b m^ab),   E_d = E₀ exp(−τ_d m^ad)
+ *   ab = 1.219 − 0.043 τ_b − 0.151 τ_d − 0.204 τ_b τ_d
+ *   ad = 0.202 + 0.852 τ_b − 0.007 τ_d − 0.357 τ_b τ_d
+ *
+ * E₀ from {@link extraterrestrialIrradianceAshrae2009}, m from {@link airMassKastenYoung}. E_b is
+ * the beam normal, E_d the diffuse horizontal irradiance, W/m²; both 0 with the sun at or below
+ * the horizon. Range data: {@link ASHRAE_2009_CLEAR_SKY_RANGE}.
+ *
+ * Example: day 172, h = 60°, τ_b = 0.556, τ_d = 1.779 → m = 1.15399, ab = 0.724682,
+ * ad = 0.310142, E₀ = 1323.10, E_b = 714.03, E_d = 206.01 W/m².
+ */
+export function clearSkyAshrae2009(dayOfYear: number, altitudeDeg: number, tauBeam: number, tauDiffuse: number): Irradiance {
+  if (!(altitudeDeg > 0)) return { beamNormal: 0, diffuseHorizontal: 0 };
+  const tb = tauBeam;
+  const td = tauDiffuse;
+  const ab = 1.219 - 0.043 * tb - 0.151 * td - 0.204 * tb * td;
+  const ad = 0.202 + 0.852 * tb - 0.007 * td - 0.357 * tb * td;
+  const m = airMassKastenYoung(altitudeDeg);
+  const e0 = extraterrestrialIrradianceAshrae2009(dayOfYear);
+  return { beamNormal: e0 * Math.exp(-tb * Math.pow(m, ab)), diffuseHorizontal: e0 * Math.exp(-td * Math.pow(m, ad)) };
+}
+
+/**
  * Global horizontal irradiance under cloud, Kasten & Czeplak (1980), eq. for G(N):
  * `G_h(N) = G_h,clear (1 − 0.75 N^3.4)`, N = cloud cover fraction 0–1 (their N/8 in oktas).
  *

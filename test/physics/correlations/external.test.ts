@@ -8,6 +8,7 @@ import {
   outsideFilmCoefficient,
   type FilmAirProperties,
 } from '../../../src/physics/correlations/external.ts';
+import { airPressureAtElevation, airPropertiesAt } from '../../../src/physics/properties/air.ts';
 
 // Air near 300 K (Incropera & DeWitt, Table A.4, from memory): k = 0.0263 W/(m K),
 // ν = 15.89e-6 m²/s, Pr = 0.707; β = 1/T_f for an ideal gas.
@@ -215,5 +216,72 @@ describe('outsideFilmCoefficient', () => {
         }
       }
     }
+  });
+});
+
+describe('rational powers written as roots and products', () => {
+  // The published formulas with Math.pow, as the reference the faster forms must reproduce.
+  const cbRef = (re: number, pr: number) =>
+    0.3 +
+    ((0.62 * Math.pow(re, 0.5) * Math.pow(pr, 1 / 3)) / Math.pow(1 + Math.pow(0.4 / pr, 2 / 3), 0.25)) *
+      Math.pow(1 + Math.pow(re / 282000, 5 / 8), 4 / 5);
+  const ccRef = (ra: number, pr: number) =>
+    Math.pow(0.825 + (0.387 * Math.pow(ra, 1 / 6)) / Math.pow(1 + Math.pow(0.492 / pr, 9 / 16), 8 / 27), 2);
+  const rel = (a: number, b: number) => Math.abs(a / b - 1);
+
+  it('give Churchill–Bernstein and Churchill–Chu within 1e-12 of the Math.pow forms', () => {
+    // Tolerance 1e-12 relative: the roots are correctly rounded or within 1 ulp, and the chains
+    // multiply at most a few such errors (about 1e-15); 1e-12 is the stated requirement.
+    for (const pr of [0.01, 0.3, 0.7, 0.72, 1, 7, 100, 1000]) {
+      for (const re of [1e-3, 0.2, 1, 47, 1e3, 6071, 1e5, 282000, 3e6, 1e7]) {
+        expect(rel(nuCylinderChurchillBernstein(re, pr), cbRef(re, pr))).toBeLessThan(1e-12);
+      }
+      for (const ra of [0, 0.1, 1, 1e4, 1.813e9, 1e12, 3e14, 1e16]) {
+        expect(rel(nuVerticalPlateChurchillChu(ra, pr), ccRef(ra, pr))).toBeLessThan(1e-12);
+      }
+    }
+  });
+
+  it('give the n = 3 Churchill combination within 1e-12 of the Math.pow form', () => {
+    for (const [f, n] of [[3, 4], [1e-3, 250], [6566, 40.6], [0.3, 0.680625]]) {
+      expect(rel(nuMixedChurchill(f, n), Math.pow(f ** 3 + n ** 3, 1 / 3))).toBeLessThan(1e-12);
+    }
+  });
+
+  it('give the Popiel factor within 1e-12 of the Math.pow form', () => {
+    const ref = (gr: number, pr: number, l: number, d: number) => {
+      const b = 0.0571322 + 0.20305 * Math.pow(pr, -0.43);
+      const c = 0.9165 - 0.0043 * Math.pow(pr, 0.5) + 0.01333 * Math.log(pr) + 0.0004809 / pr;
+      return 1 + b * Math.pow((Math.pow(32, 0.5) * Math.pow(gr, -0.25) * l) / d, c);
+    };
+    for (const [gr, pr, l, d] of [[1e8, 0.7, 100, 1], [1e6, 0.72, 20, 0.5], [3e9, 5, 30, 2]]) {
+      expect(rel(slenderCylinderFactorPopiel(gr, pr, l, d), ref(gr, pr, l, d))).toBeLessThan(1e-12);
+    }
+  });
+});
+
+describe('outside film coefficient at a high site (site pressure)', () => {
+  it('is about 17 % lower at 2000 m than at sea level, as a hand computation gives', () => {
+    // Hand computation (independent script of the published formulas) with Incropera Table A.4 air
+    // at T_f = 300 K (k 0.0263, μ 184.6e-7, cp 1007 → Pr 0.706814; from memory) and the standard
+    // atmosphere: p(2000 m) = 101325·(1 − 0.0065·1999.371/288.15)^5.255786 = 79 501.8 Pa
+    // (US Standard Atmosphere 1976 lists 7.95·10⁴ Pa; from memory). U = 3 m/s, D = 2 m, H = 50 m,
+    // T_s = 310 K, T_air = 290 K.
+    //   sea level: ρ 1.176592, ν 1.568939e-5, Re 382 424, Ra_H 2.34657e14 → Nu_F 565.635,
+    //              Nu_N 6620.93 → h_F 7.43810, h_N 3.48261, h = 7.68434 W/(m² K)
+    //   2000 m:    ρ 0.923179, ν 1.999613e-5, Re 300 058, Ra_H 1.44462e14 → Nu_F 469.971,
+    //              Nu_N 5642.01 → h_F 6.18013, h_N 2.96770, h = 6.40030 W/(m² K)
+    // Ratio 0.8329: ν ∝ 1/p lowers Re by p and Gr by p². Tolerance 1e-5 relative: the script's
+    // arithmetic is double precision; the film properties hit a table row exactly.
+    const input = { windSpeed: 3, outerDiameter: 2, height: 50, surfaceTemperatureK: 310, airTemperatureK: 290 };
+    const pHigh = airPressureAtElevation(2000);
+    expect(Math.abs(pHigh / 79501.76 - 1)).toBeLessThan(1e-6);
+    const sea = outsideFilmCoefficient(input, airPropertiesAt(300, 101325));
+    const high = outsideFilmCoefficient(input, airPropertiesAt(300, pHigh));
+    expect(Math.abs(sea.h / 7.684344 - 1)).toBeLessThan(1e-5);
+    expect(Math.abs(high.h / 6.400298 - 1)).toBeLessThan(1e-5);
+    expect(Math.abs(high.hForced / 6.180125 - 1)).toBeLessThan(1e-5);
+    expect(Math.abs(high.hNatural / 2.967698 - 1)).toBeLessThan(1e-5);
+    expect(Math.abs(high.h / sea.h - 0.832901)).toBeLessThan(1e-5);
   });
 });

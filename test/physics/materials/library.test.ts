@@ -131,6 +131,24 @@ describe('materials against handbook values', () => {
     expect(interpolateTable(c.specificHeat, 300)).toBeCloseTo(880, 9);
   });
 
+  it('follows the EN 1992-1-2 specific heat of dry concrete from 100 to 1200 °C', () => {
+    // EN 1992-1-2:2004 clause 3.3.2(1), eq. (3.9), dry concrete (u = 0 %), from memory:
+    // 900 (20–100 °C), 900 + (θ − 100) (100–200 °C), 1000 + (θ − 200)/2 (200–400 °C), 1100 (400–1200 °C).
+    const en = (theta: number) =>
+      theta <= 100 ? 900 : theta <= 200 ? 900 + (theta - 100) : theta <= 400 ? 1000 + (theta - 200) / 2 : 1100;
+    const cp = mat('concrete').specificHeat;
+    // Tolerance 1e-9 J/(kg K): the standard's curve is piecewise linear and the table holds its corners.
+    for (let theta = 100; theta <= 1200; theta += 12.5) {
+      expect(interpolateTable(cp, theta + 273.15)).toBeCloseTo(en(theta), 9);
+    }
+    // The value the reviewing engineer checked: 1100 J/(kg K) at 400 °C (the old table gave 1050).
+    expect(interpolateTable(cp, 673.15)).toBeCloseTo(1100, 9);
+    // 20–100 °C: the handbook's 880 at 300 K meets the standard's 900 at 100 °C; within 2.3 %.
+    for (let theta = 20; theta <= 100; theta += 10) {
+      expect(Math.abs(interpolateTable(cp, theta + 273.15) / en(theta) - 1)).toBeLessThan(0.023);
+    }
+  });
+
   it('stores the hand-summed enthalpy rise of carbon steel from 300 to 1000 K', () => {
     // Trapezoids over Table A.1 cp points (from memory), summed by hand:
     // 100·(434+487)/2 + 200·(487+559)/2 + 200·(559+685)/2 + 200·(685+1169)/2
