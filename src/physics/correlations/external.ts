@@ -242,8 +242,22 @@ export function outsideFilmCoefficient(
   air: FilmAirProperties,
   correlations: OutsideFilmCorrelations = DEFAULT_OUTSIDE_FILM_CORRELATIONS,
 ): OutsideFilmResult {
-  const { windSpeed, outerDiameter, height: stackHeight, surfaceTemperatureK, airTemperatureK } =
-    input;
+  return outsideFilmCoefficientInto(input.windSpeed, input.outerDiameter, input.height, input.surfaceTemperatureK, input.airTemperatureK, air, correlations, {
+    h: 0, nuForced: 0, nuNatural: 0, nuMixed: 0, re: 0, ra: 0, grashof: 0, hForced: 0, hNatural: 0, slender: false, slenderCorrected: false,
+  });
+}
+
+/** `outsideFilmCoefficient` with scalar inputs, writing into `out` (no allocation: the model's hot path). */
+export function outsideFilmCoefficientInto(
+  windSpeed: number,
+  outerDiameter: number,
+  stackHeight: number,
+  surfaceTemperatureK: number,
+  airTemperatureK: number,
+  air: FilmAirProperties,
+  correlations: OutsideFilmCorrelations,
+  out: { -readonly [K in keyof OutsideFilmResult]: OutsideFilmResult[K] },
+): OutsideFilmResult {
   const deltaT = Math.abs(surfaceTemperatureK - airTemperatureK);
   const nu = air.kinematicViscosity;
   const re = (Math.abs(windSpeed) * outerDiameter) / nu;
@@ -271,18 +285,16 @@ export function outsideFilmCoefficient(
     hNatural = (correlations.natural(0, air.prandtl) * air.conductivity) / stackHeight;
   }
   const h = correlations.mixed(hForced, hNatural);
-  const nuMixed = (h * outerDiameter) / air.conductivity;
-  return {
-    h,
-    nuForced,
-    nuNatural,
-    nuMixed,
-    re,
-    ra,
-    grashof,
-    hForced,
-    hNatural,
-    slender,
-    slenderCorrected,
-  };
+  out.h = h;
+  out.nuForced = nuForced;
+  out.nuNatural = nuNatural;
+  out.nuMixed = (h * outerDiameter) / air.conductivity;
+  out.re = re;
+  out.ra = ra;
+  out.grashof = grashof;
+  out.hForced = hForced;
+  out.hNatural = hNatural;
+  out.slender = slender;
+  out.slenderCorrected = slenderCorrected;
+  return out;
 }

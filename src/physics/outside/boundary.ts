@@ -8,7 +8,7 @@
  * SI units: K, m/s, m, W/m, W/(m K). Pure apart from writing `out` (and the air-property scratch).
  */
 import { airPropertiesInto, type AirProperties } from '../properties/air.ts';
-import { outsideFilmCoefficient, type OutsideFilmCorrelations } from '../correlations/external.ts';
+import { outsideFilmCoefficientInto, type OutsideFilmCorrelations, type OutsideFilmResult } from '../correlations/external.ts';
 import {
   radiationCoefficientToSkyAndGround,
   radiationToSkyAndGround,
@@ -120,6 +120,10 @@ export interface OuterBoundaryOfSegment {
   slenderCorrected: boolean;
 }
 
+const filmResult: { -readonly [K in keyof OutsideFilmResult]: OutsideFilmResult[K] } = {
+  h: 0, nuForced: 0, nuNatural: 0, nuMixed: 0, re: 0, ra: 0, grashof: 0, hForced: 0, hNatural: 0, slender: false, slenderCorrected: false,
+};
+
 export function emptyOuterBoundary(): OuterBoundaryOfSegment {
   return { convectionPerMetre: 0, radiationPerMetre: 0, sunPerMetre: 0, sinkPerMetre: 0, convectionSinkPerMetre: 0, radiationSinkPerMetre: 0, filmCoefficient: 0, reynolds: Number.NaN, rayleigh: Number.NaN, grashof: Number.NaN, prandtl: Number.NaN, slenderCorrected: false };
 }
@@ -143,11 +147,7 @@ export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number,
     out.slenderCorrected = false;
   } else {
     const air = airPropertiesInto(film, 0.5 * (surfaceK + c.airTemperatureK));
-    const f = outsideFilmCoefficient(
-      { windSpeed: c.windSpeed, outerDiameter: spec.outerDiameter, height: spec.height, surfaceTemperatureK: surfaceK, airTemperatureK: c.airTemperatureK },
-      air,
-      spec.filmCorrelations,
-    );
+    const f = outsideFilmCoefficientInto(c.windSpeed, spec.outerDiameter, spec.height, surfaceK, c.airTemperatureK, air, spec.filmCorrelations, filmResult);
     h = f.h;
     out.reynolds = f.re;
     out.rayleigh = f.ra;

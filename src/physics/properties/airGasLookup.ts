@@ -5,7 +5,7 @@
  * (Incropera & DeWitt Table A.4 via `airPropertiesAt`), not the kinetic-theory mixture of
  * `makeGasPropertyTable(airAsFlueGas, …)`, which differs from the table by a few per cent.
  */
-import { airPropertiesAt } from './air.ts';
+import { airPropertiesAt, airPropertiesInto } from './air.ts';
 import type { GasPropertyLookup } from './flueGas.ts';
 
 /**
@@ -22,14 +22,16 @@ import type { GasPropertyLookup } from './flueGas.ts';
  */
 export function makeAirGasPropertyLookup(pressurePa: number): GasPropertyLookup {
   if (!(pressurePa > 0)) throw new RangeError(`air property lookup: pressure must be positive (got ${pressurePa} Pa)`);
+  const a = airPropertiesAt(300, pressurePa);
+  // one result object, refilled on every call (no allocation on the model's hot path)
+  const out = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
   return (temperatureK: number) => {
-    const a = airPropertiesAt(temperatureK, pressurePa);
-    return {
-      density: a.density,
-      specificHeat: a.specificHeat,
-      conductivity: a.conductivity,
-      dynamicViscosity: a.dynamicViscosity,
-      prandtl: a.prandtl,
-    };
+    airPropertiesInto(a, temperatureK, pressurePa);
+    out.density = a.density;
+    out.specificHeat = a.specificHeat;
+    out.conductivity = a.conductivity;
+    out.dynamicViscosity = a.dynamicViscosity;
+    out.prandtl = a.prandtl;
+    return out;
   };
 }

@@ -353,6 +353,7 @@ export interface GasTableRange {
 }
 
 /** A fast property lookup: linear interpolation in a precomputed table. */
+/** Gas properties at a temperature; the object returned may be reused by the next call (read it, do not keep it). */
 export type GasPropertyLookup = (temperatureK: number) => GasProperties;
 
 /**
@@ -381,6 +382,8 @@ export function makeGasPropertyTable(
   }
   const rhoT = (pressurePa * mixtureMolarMass(composition)) / GAS_CONSTANT; // density × T
   const lastK = fromK + (n - 1) * stepK;
+  // one result object, refilled on every call (no allocation on the model's hot path)
+  const out = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
   return (temperatureK: number): GasProperties => {
     if (!(temperatureK >= fromK && temperatureK <= lastK)) return gasPropertiesAt(composition, pressurePa, temperatureK);
     const u = (temperatureK - fromK) / stepK;
@@ -389,12 +392,11 @@ export function makeGasPropertyTable(
     const specificHeat = cp[i] + f * (cp[i + 1] - cp[i]);
     const dynamicViscosity = mu[i] + f * (mu[i + 1] - mu[i]);
     const conductivity = k[i] + f * (k[i + 1] - k[i]);
-    return {
-      density: rhoT / temperatureK,
-      specificHeat,
-      conductivity,
-      dynamicViscosity,
-      prandtl: (specificHeat * dynamicViscosity) / conductivity,
-    };
+    out.density = rhoT / temperatureK;
+    out.specificHeat = specificHeat;
+    out.conductivity = conductivity;
+    out.dynamicViscosity = dynamicViscosity;
+    out.prandtl = (specificHeat * dynamicViscosity) / conductivity;
+    return out;
   };
 }
