@@ -27,6 +27,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { SOLAR_CONSTANT, STEFAN_BOLTZMANN } from '../src/physics/constants.ts';
 import { clearSkyAshrae, cloudReducedIrradiance } from '../src/physics/sun/irradiance.ts';
 import { sunPosition } from '../src/physics/sun/position.ts';
+import { seededNormal, seededUniform } from './random.ts';
 
 export const DEMO_SEED = 56201;
 export const DEMO_FILE = join(dirname(fileURLToPath(import.meta.url)), '..', 'scenarios', 'weather', 'brennholm-typical-year.epw');
@@ -42,23 +43,6 @@ const DEW_DEPRESSION_K = [1.6, 1.9, 2.6, 3.8, 4.6, 4.8, 4.6, 4.2, 3.4, 2.5, 1.8,
 const ANOMALY_SD_K = [2.8, 2.8, 2.4, 2.0, 1.8, 1.7, 1.7, 1.7, 1.8, 2.0, 2.4, 2.8];
 const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 const REFERENCE_YEAR = 2025; // for the sun's position only (not a leap year)
-
-/** Seeded uniform numbers in [0, 1) (mulberry32). */
-function uniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/** Seeded standard normal numbers (Box–Muller). */
-function normal(u: () => number): () => number {
-  return () => Math.sqrt(-2 * Math.log(1 - u())) * Math.cos(2 * Math.PI * u());
-}
 
 /** First-order autoregressive process with unit variance and memory `hours` (e-folding). */
 function ar1(n: () => number, hours: number): () => number {
@@ -90,8 +74,8 @@ const saturationHpa = (c: number) => 6.112 * Math.exp((17.62 * c) / (243.12 + c)
 
 /** The EPW text of the invented typical year for `seed`. */
 export function makeTypicalYearEpw(seed = DEMO_SEED): string {
-  const u = uniform(seed);
-  const n = normal(u);
+  const u = seededUniform(seed);
+  const n = seededNormal(u);
   const anomaly = ar1(n, 72);
   const cloudZ = ar1(n, 30);
   const windZ = ar1(n, 36);

@@ -7,6 +7,7 @@ import {
   turningPoints,
   type RainflowCycle,
 } from '../../src/analysis/rainflow.ts';
+import { seededUniform } from '../../scripts/random.ts';
 
 /** Cycles of `series` through the streaming counter, fed one value at a time. */
 function streamed(series: ArrayLike<number>): { cycles: RainflowCycle[]; mostOpen: number } {
@@ -28,17 +29,8 @@ function table(cycles: RainflowCycle[]): [number, number][] {
   return [...m].sort((a, b) => a[0] - b[0]);
 }
 
-/** A seeded pseudo-random generator (mulberry32) so that every run tests the same series. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Seeded uniform numbers, so that every run tests the same series. */
+const random = seededUniform;
 
 // ASTM E1049-85 (2011), Fig. 6 "Rainflow Counting Example": the load history A…I below and the
 // counted table (f): range 3 → 0.5 (A-B), 4 → 1.5 (B-C, E-F), 6 → 0.5 (H-I), 8 → 1.0 (C-D, G-H),
