@@ -1,5 +1,5 @@
 /**
- * Typical-meteorological-year weather (TMY3 and EPW files) as a {@link WeatherSource}: the parts
+ * Typical-meteorological-year weather (TMY3 and EPW files) as a WeatherSource: the parts
  * both readers share — the site, the hour-by-hour rows of one year, their placement on a calendar
  * year and the interpolation between them.
  *
