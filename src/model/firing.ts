@@ -77,6 +77,60 @@ function daysOf(spec: FiringScheduleSpec): { label: (d: number) => string; days:
 }
 
 /**
+ * Everything wrong with one day's points, as messages that start with `where` and the point's
+ * index (e.g. `daily[2]: …`); empty when the points are usable. Shared by the schedules here and
+ * by the plant calendar.
+ */
+export function validateDayPoints(points: readonly FiringPoint[], where: string): string[] {
+  const out: string[] = [];
+  if (!Array.isArray(points) || points.length === 0) return [`${where}: needs at least one point`];
+  points.forEach((p, i) => {
+    const at = `${where}[${i}]`;
+    if (!Number.isFinite(p.clockS) || p.clockS < 0 || p.clockS > SECONDS_PER_DAY)
+      out.push(`${at}: clockS ${p.clockS} is outside 0…86400 s (0…24 h after local midnight)`);
+    if (!Number.isFinite(p.massFlow) || p.massFlow < 0) out.push(`${at}: massFlow ${p.massFlow} kg/s must be ≥ 0`);
+    if (!Number.isFinite(p.inletTemperatureK) || p.inletTemperatureK <= 0)
+      out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} is not a physical temperature (kelvin > 0)`);
+    else if (p.inletTemperatureK < LOWEST_PLAUSIBLE_INLET_K)
+      out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} K is below ${LOWEST_PLAUSIBLE_INLET_K} K — was °C given where kelvin is expected (°C + ${KELVIN_OFFSET})?`);
+    else if (p.inletTemperatureK > HIGHEST_PLAUSIBLE_INLET_K)
+      out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} K is above ${HIGHEST_PLAUSIBLE_INLET_K} K, beyond any flue gas`);
+    if (i > 0) {
+      const prev = points[i - 1].clockS;
+      if (p.clockS < prev) out.push(`${at}: clockS ${p.clockS} goes back before the previous point's ${prev} (times must not decrease)`);
+      else if (i > 1 && p.clockS === prev && points[i - 2].clockS === prev)
+        out.push(`${at}: clockS ${p.clockS} is the third point at the same time (two points at one time make a step; more are ambiguous)`);
+    }
+  });
+  return out;
+}
+
+/** Largest finite, non-negative scheduled flow among `days` (0 when none), kg/s. */
+export function largestMassFlow(days: readonly (readonly FiringPoint[])[]): number {
+  let largest = 0;
+  for (const points of days) {
+    if (!Array.isArray(points)) continue;
+    for (const p of points) if (Number.isFinite(p.massFlow) && p.massFlow > largest) largest = p.massFlow;
+  }
+  return largest;
+}
+
+/**
+ * Messages about the flow floor: a bad `offMassFlow`, or no flow at all with no floor to carry
+ * the gas balance. `largest` is the largest scheduled flow; `otherProblems` says whether anything
+ * else is already wrong (then an all-zero schedule is not reported twice).
+ */
+export function validateFlowFloor(offMassFlow: number | undefined, largest: number, otherProblems: boolean): string[] {
+  if (offMassFlow !== undefined) {
+    if (!Number.isFinite(offMassFlow) || offMassFlow < 0) return [`offMassFlow ${offMassFlow} kg/s must be ≥ 0`];
+    if (offMassFlow === 0 && largest === 0) return ['every scheduled flow is 0 and offMassFlow is 0: the gas balance needs some flow'];
+  } else if (largest === 0 && !otherProblems) {
+    return ['every scheduled flow is 0: give offMassFlow (the natural-draft flow with the burner off)'];
+  }
+  return [];
+}
+
+/**
  * Everything wrong with a schedule, as messages naming the offending point and value; empty when
  * the schedule is usable.
  */
@@ -87,40 +141,8 @@ export function validateFiringSchedule(spec: FiringScheduleSpec): string[] {
   if (s.daily === undefined && s.perDay === undefined) return [...out, 'give daily (points for every day) or perDay (a list of day-schedules)'];
   if (s.perDay !== undefined && (!Array.isArray(s.perDay) || s.perDay.length === 0)) return [...out, 'perDay must list at least one day-schedule'];
   const { label, days } = daysOf(spec);
-  let largest = 0;
-  days.forEach((points, d) => {
-    const where = label(d);
-    if (!Array.isArray(points) || points.length === 0) {
-      out.push(`${where}: needs at least one point`);
-      return;
-    }
-    points.forEach((p, i) => {
-      const at = `${where}[${i}]`;
-      if (!Number.isFinite(p.clockS) || p.clockS < 0 || p.clockS > SECONDS_PER_DAY)
-        out.push(`${at}: clockS ${p.clockS} is outside 0…86400 s (0…24 h after local midnight)`);
-      if (!Number.isFinite(p.massFlow) || p.massFlow < 0) out.push(`${at}: massFlow ${p.massFlow} kg/s must be ≥ 0`);
-      else largest = Math.max(largest, p.massFlow);
-      if (!Number.isFinite(p.inletTemperatureK) || p.inletTemperatureK <= 0)
-        out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} is not a physical temperature (kelvin > 0)`);
-      else if (p.inletTemperatureK < LOWEST_PLAUSIBLE_INLET_K)
-        out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} K is below ${LOWEST_PLAUSIBLE_INLET_K} K — was °C given where kelvin is expected (°C + ${KELVIN_OFFSET})?`);
-      else if (p.inletTemperatureK > HIGHEST_PLAUSIBLE_INLET_K)
-        out.push(`${at}: inletTemperatureK ${p.inletTemperatureK} K is above ${HIGHEST_PLAUSIBLE_INLET_K} K, beyond any flue gas`);
-      if (i > 0) {
-        const prev = points[i - 1].clockS;
-        if (p.clockS < prev) out.push(`${at}: clockS ${p.clockS} goes back before the previous point's ${prev} (times must not decrease)`);
-        else if (i > 1 && p.clockS === prev && points[i - 2].clockS === prev)
-          out.push(`${at}: clockS ${p.clockS} is the third point at the same time (two points at one time make a step; more are ambiguous)`);
-      }
-    });
-  });
-  if (spec.offMassFlow !== undefined) {
-    if (!Number.isFinite(spec.offMassFlow) || spec.offMassFlow < 0) out.push(`offMassFlow ${spec.offMassFlow} kg/s must be ≥ 0`);
-    else if (spec.offMassFlow === 0 && largest === 0) out.push('every scheduled flow is 0 and offMassFlow is 0: the gas balance needs some flow');
-  } else if (largest === 0 && out.length === 0) {
-    out.push('every scheduled flow is 0: give offMassFlow (the natural-draft flow with the burner off)');
-  }
-  return out;
+  days.forEach((points, d) => out.push(...validateDayPoints(points, label(d))));
+  return [...out, ...validateFlowFloor(spec.offMassFlow, largestMassFlow(days), out.length > 0)];
 }
 
 /** Scheduled (un-floored) values at clock time `clockS` within one day's points. */
@@ -149,11 +171,22 @@ export function makeFiringSchedule(spec: FiringScheduleSpec): FiringSchedule {
   const problems = validateFiringSchedule(spec);
   if (problems.length) throw new RangeError(`firing schedule: ${problems.join('; ')}`);
   const { days } = daysOf(spec);
-  const largest = Math.max(...days.flatMap((pts) => pts.map((p) => p.massFlow)));
-  const floor = spec.offMassFlow ?? DEFAULT_OFF_FLOW_FRACTION * largest;
-  const dayPoints = (dayIndex: number) => days[((Math.floor(dayIndex) % days.length) + days.length) % days.length];
+  const floor = spec.offMassFlow ?? DEFAULT_OFF_FLOW_FRACTION * largestMassFlow(days);
+  return makeFiringScheduleFromDays((dayIndex) => days[((Math.floor(dayIndex) % days.length) + days.length) % days.length], floor);
+}
 
-  const cornerCache = days.map((points) => {
+/**
+ * A firing schedule whose points for day `dayIndex` come from `pointsForDay` (already validated,
+ * e.g. by {@link validateDayPoints}), with the flow floor `offMassFlow` (kg/s). The interpolation
+ * and corner rules are those of the module note. Corners are cached per points array, so
+ * `pointsForDay` should hand back the same array object for the same day-schedule.
+ */
+export function makeFiringScheduleFromDays(pointsForDay: (dayIndex: number) => readonly FiringPoint[], offMassFlow: number): FiringSchedule {
+  const floor = offMassFlow;
+  const cornerCache = new WeakMap<readonly FiringPoint[], number[]>();
+  const cornersOf = (points: readonly FiringPoint[]): number[] => {
+    let cached = cornerCache.get(points);
+    if (cached) return cached;
     const set = new Set<number>(points.map((p) => p.clockS));
     for (let i = 0; i + 1 < points.length; i++) {
       const a = points[i];
@@ -163,13 +196,15 @@ export function makeFiringSchedule(spec: FiringScheduleSpec): FiringSchedule {
       if ((a.massFlow - floor) * (b.massFlow - floor) < 0)
         set.add(a.clockS + ((floor - a.massFlow) / (b.massFlow - a.massFlow)) * (b.clockS - a.clockS));
     }
-    return [...set].sort((x, y) => x - y);
-  });
+    cached = [...set].sort((x, y) => x - y);
+    cornerCache.set(points, cached);
+    return cached;
+  };
 
   return {
     offMassFlow: floor,
     at(dayIndex, clockS) {
-      const v = interpolate(dayPoints(dayIndex), clockS);
+      const v = interpolate(pointsForDay(dayIndex), clockS);
       return {
         inletTemperatureK: v.inletTemperatureK,
         massFlow: Math.max(v.massFlow, floor),
@@ -177,7 +212,7 @@ export function makeFiringSchedule(spec: FiringScheduleSpec): FiringSchedule {
       };
     },
     corners(dayIndex) {
-      return [...cornerCache[((Math.floor(dayIndex) % days.length) + days.length) % days.length]];
+      return [...cornersOf(pointsForDay(dayIndex))];
     },
   };
 }
