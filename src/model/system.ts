@@ -16,7 +16,7 @@ import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../p
 import { gapConductancePerMetre } from '../physics/wall/gap.ts';
 import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
 import { airPropertiesAt } from '../physics/properties/air.ts';
-import type { GasPropertyLookup } from '../physics/properties/flueGas.ts';
+import type { GasPropertyLookup, MutableGasProperties } from '../physics/properties/flueGas.ts';
 import { flueSideOfSegment, emptyFlueSide, type FlueSideSpec } from '../physics/flue/inside.ts';
 import { outerBoundaryOfSegment, emptyOuterBoundary, type OuterSurfaceSpec, type OuterBoundaryOfSegment } from '../physics/outside/boundary.ts';
 import { gapConvectionRatio, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
@@ -85,6 +85,7 @@ export class StackWallSystem implements OdeSystem {
   private readonly flue = emptyFlueSide();
   private readonly outer: OuterBoundaryOfSegment = emptyOuterBoundary();
   private readonly film = airPropertiesAt(300);
+  private readonly gasProps: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
   private readonly outside = { airTemperatureK: 0, windSpeed: 0, skyTemperatureK: 0, groundTemperatureK: 0, sunPerMetre: 0 };
   /** Instant and state fingerprint at which `innerSink`/`outerSink` were last computed (reused by `jacobian`). */
   private sinksT = Number.NaN;
@@ -203,7 +204,7 @@ export class StackWallSystem implements OdeSystem {
 
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;
-      flueSideOfSegment(this.flueSpec, gasIn, y[o]!, d.massFlow, this.gas(gasIn), flue);
+      flueSideOfSegment(this.flueSpec, gasIn, y[o]!, d.massFlow, this.gas(gasIn, this.gasProps), flue);
       this.flueToWall[s] = flue.heatPerMetre;
       this.innerSink[s] = flue.sinkPerMetre;
 

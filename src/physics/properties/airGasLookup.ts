@@ -6,7 +6,7 @@
  * `makeGasPropertyTable(airAsFlueGas, …)`, which differs from the table by a few per cent.
  */
 import { airPropertiesAt, airPropertiesInto } from './air.ts';
-import type { GasPropertyLookup } from './flueGas.ts';
+import type { GasPropertyLookup, MutableGasProperties } from './flueGas.ts';
 
 /**
  * A flue-gas property lookup (the interface `makeGasPropertyTable` returns) that reads dry air from
@@ -23,10 +23,9 @@ import type { GasPropertyLookup } from './flueGas.ts';
 export function makeAirGasPropertyLookup(pressurePa: number): GasPropertyLookup {
   if (!(pressurePa > 0)) throw new RangeError(`air property lookup: pressure must be positive (got ${pressurePa} Pa)`);
   const a = airPropertiesAt(300, pressurePa);
-  // one result object, refilled on every call (no allocation on the model's hot path)
-  const out = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
-  return (temperatureK: number) => {
+  return (temperatureK: number, into?: MutableGasProperties) => {
     airPropertiesInto(a, temperatureK, pressurePa);
+    const out = into ?? { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
     out.density = a.density;
     out.specificHeat = a.specificHeat;
     out.conductivity = a.conductivity;

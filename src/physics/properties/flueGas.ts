@@ -353,8 +353,14 @@ export interface GasTableRange {
 }
 
 /** A fast property lookup: linear interpolation in a precomputed table. */
-/** Gas properties at a temperature; the object returned may be reused by the next call (read it, do not keep it). */
-export type GasPropertyLookup = (temperatureK: number) => GasProperties;
+/** Gas properties with writable fields (a scratch object for `GasPropertyLookup`). */
+export type MutableGasProperties = { -readonly [K in keyof GasProperties]: GasProperties[K] };
+
+/**
+ * Gas properties at a temperature: a new object, or `into` filled and returned (no allocation, for
+ * the model's hot path).
+ */
+export type GasPropertyLookup = (temperatureK: number, into?: MutableGasProperties) => GasProperties;
 
 /**
  * Precompute the mixture properties on a temperature grid and return a fast lookup.
@@ -382,9 +388,7 @@ export function makeGasPropertyTable(
   }
   const rhoT = (pressurePa * mixtureMolarMass(composition)) / GAS_CONSTANT; // density × T
   const lastK = fromK + (n - 1) * stepK;
-  // one result object, refilled on every call (no allocation on the model's hot path)
-  const out = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
-  return (temperatureK: number): GasProperties => {
+  return (temperatureK: number, into?: MutableGasProperties): GasProperties => {
     if (!(temperatureK >= fromK && temperatureK <= lastK)) return gasPropertiesAt(composition, pressurePa, temperatureK);
     const u = (temperatureK - fromK) / stepK;
     const i = Math.min(Math.floor(u), n - 2);
@@ -392,6 +396,7 @@ export function makeGasPropertyTable(
     const specificHeat = cp[i] + f * (cp[i + 1] - cp[i]);
     const dynamicViscosity = mu[i] + f * (mu[i + 1] - mu[i]);
     const conductivity = k[i] + f * (k[i + 1] - k[i]);
+    const out = into ?? { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
     out.density = rhoT / temperatureK;
     out.specificHeat = specificHeat;
     out.conductivity = conductivity;
