@@ -8,9 +8,10 @@ import { makeSiteClock, type SiteClock } from './clock.ts';
 import { buildWallMesh, type WallMesh } from '../physics/wall/mesh.ts';
 import { StackWallSystem, type StackGeometry } from './system.ts';
 import type { DriverContext } from './drivers.ts';
-import { windAtHeight } from '../physics/outside/wind.ts';
+import { TERRAIN_BOUNDARY_LAYERS, windAtHeight, windAtHeightFromStation } from '../physics/outside/wind.ts';
 import { makeFiringSchedule } from './firing.ts';
-import { makeGasPropertyTable, airAsFlueGas, type GasPropertyLookup } from '../physics/properties/flueGas.ts';
+import { makeGasPropertyTable, type GasPropertyLookup } from '../physics/properties/flueGas.ts';
+import { makeAirGasPropertyLookup } from '../physics/properties/airGasLookup.ts';
 
 /** The model assembled for one run. */
 export interface AssembledModel {
@@ -21,6 +22,22 @@ export interface AssembledModel {
   readonly gas: GasPropertyLookup;
   readonly system: StackWallSystem;
   readonly ctx: DriverContext;
+  /** Atmospheric pressure at the site, Pa. */
+  readonly sitePressurePa: number;
+}
+
+/**
+ * Wind at each height per unit wind at the weather's reference height: the two-terrain power law
+ * from the station's terrain to the site's (capped at the site's boundary-layer height) when both
+ * are known, else the site's exponent applied to the reading directly.
+ */
+function windFactors(inputs: ModelInputs, referenceHeightM: number, midHeight: Float64Array): Float64Array {
+  const { siteTerrain, stationTerrain, windExponent } = inputs.site;
+  return midHeight.map((z) =>
+    siteTerrain && stationTerrain
+      ? windAtHeightFromStation(1, referenceHeightM, TERRAIN_BOUNDARY_LAYERS[stationTerrain], z, TERRAIN_BOUNDARY_LAYERS[siteTerrain])
+      : windAtHeight(1, referenceHeightM, z, windExponent),
+  );
 }
 
 /** Build the mesh, the drivers and the ODE system for the inputs. */
@@ -30,12 +47,8 @@ export function assembleModel(inputs: ModelInputs): AssembledModel {
   const segments = inputs.stack.segments;
   const dz = inputs.stack.height / segments;
   const weather = inputs.weather.source;
-  const midHeight = new Float64Array(segments);
-  const windFactor = new Float64Array(segments);
-  for (let s = 0; s < segments; s++) {
-    midHeight[s] = (s + 0.5) * dz;
-    windFactor[s] = windAtHeight(1, weather.referenceHeightM, midHeight[s]!, inputs.site.windExponent);
-  }
+  const midHeight = new Float64Array(segments).map((_, s) => (s + 0.5) * dz);
+  const windFactor = windFactors(inputs, weather.referenceHeightM, midHeight);
   const geometry: StackGeometry = {
     segments,
     segmentLength: dz,
@@ -45,8 +58,8 @@ export function assembleModel(inputs: ModelInputs): AssembledModel {
     outerDiameter: 2 * mesh.outerRadius,
   };
   const schedule = makeFiringSchedule({ ...inputs.flue.schedule, offMassFlow: inputs.flue.offMassFlow });
-  const composition = inputs.flue.properties === 'air' ? airAsFlueGas : inputs.flue.composition;
-  const gas = makeGasPropertyTable(composition, inputs.flue.pressurePa);
+  // `properties: air` reads the same air table as the outside film
+  const gas = inputs.flue.properties === 'air' ? makeAirGasPropertyLookup(inputs.flue.pressurePa) : makeGasPropertyTable(inputs.flue.composition, inputs.flue.pressurePa);
   const ctx: DriverContext = {
     inputs,
     clock,
@@ -56,5 +69,5 @@ export function assembleModel(inputs: ModelInputs): AssembledModel {
     repeatFirstDay: inputs.run.length.kind === 'until-periodic',
   };
   const system = new StackWallSystem(inputs, mesh, geometry, ctx, gas);
-  return { inputs, clock, mesh, geometry, gas, system, ctx };
+  return { inputs, clock, mesh, geometry, gas, system, ctx, sitePressurePa: system.sitePressurePa };
 }

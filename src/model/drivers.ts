@@ -58,7 +58,7 @@ export function evaluateDrivers(ctx: DriverContext, tRun: number, out: Drivers):
 
   surroundingTemperatures(inputs.outside.radiation, air, out);
 
-  const sun = solarAt(utcMs, inputs.site, air);
+  const sun = solarAt(utcMs, inputs.site, air, inputs.outside.clearSky);
   out.sunAltitudeDeg = sun.altitudeDeg;
   out.sunAzimuthDeg = sun.azimuthDeg;
   out.beamNormal = sun.beamNormal;

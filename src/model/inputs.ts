@@ -6,6 +6,8 @@
 import type { WallLayer } from '../physics/wall/mesh.ts';
 import type { WeatherSource } from '../physics/outside/weather.ts';
 import type { OutsideRadiation } from '../physics/outside/boundary.ts';
+import type { Terrain } from '../physics/outside/wind.ts';
+import type { ClearSkyModel } from '../physics/sun/irradiance.ts';
 import type { DaySchedules, FiringPoint } from './firing.ts';
 
 export interface SiteInput {
@@ -21,6 +23,15 @@ export interface SiteInput {
   readonly groundReflectance: number;
   /** Wind power-law exponent α for the site's terrain. */
   readonly windExponent: number;
+  /**
+   * Terrain classes of the site and of the weather station that measured the wind: with both, the
+   * wind at height follows the two-terrain power law (capped at the site's boundary-layer height);
+   * without them, `windExponent` is applied to the reading directly (a user-given exponent).
+   */
+  readonly siteTerrain?: Terrain;
+  readonly stationTerrain?: Terrain;
+  /** Atmospheric pressure at the site, Pa (air properties outside and in gaps; default flue pressure). Default: the standard atmosphere at the elevation. */
+  readonly pressurePa?: number;
 }
 
 export interface StackInput {
@@ -44,6 +55,8 @@ export interface OutsideInput {
   readonly radiation: OutsideRadiation;
   /** Whether absorbed sun is applied. */
   readonly sun: boolean;
+  /** Clear-sky irradiance model where the weather does not measure it; default ASHRAE 1985 with constants interpolated by day. */
+  readonly clearSky?: ClearSkyModel;
 }
 
 /**
@@ -94,6 +107,8 @@ export interface FlueInput {
   readonly gasCooling: boolean;
   /** Absolute pressure in the flue, Pa. */
   readonly pressurePa: number;
+  /** Whether the H2O–CO2 gas radiates to the lining (weighted-sum-of-grey-gases); default false for inputs built in code, true from scenario files. */
+  readonly gasRadiation?: boolean;
 }
 
 export interface RunInput {

@@ -12,7 +12,7 @@ import type { GasPropertyLookup } from '../physics/properties/flueGas.ts';
 import { CorrelationRangeTally } from '../physics/correlations/registry.ts';
 import { flueGasDewPoints } from '../physics/flue/dewPoint.ts';
 import { stackDraftPa } from '../physics/flue/draft.ts';
-import { airDensityIdealGas, airPressureAtElevation } from '../physics/properties/air.ts';
+import { airDensityIdealGas } from '../physics/properties/air.ts';
 import { SERIES_INSTANT_CHANNELS, SERIES_SEGMENT_CHANNELS, type SeriesInstantChannel, type SeriesSegmentChannel, type TimeSeries } from './timeseries.ts';
 import type { SegmentDiagnostics, StackGeometry } from './system.ts';
 import { checkCorrelationRanges } from './rangeChecks.ts';
@@ -57,6 +57,8 @@ export interface RecorderContext {
   readonly geometry: StackGeometry;
   readonly clock: SiteClock;
   readonly gas: GasPropertyLookup;
+  /** Atmospheric pressure at the site, Pa. */
+  readonly sitePressurePa: number;
 }
 
 export class Recorder {
@@ -81,7 +83,7 @@ export class Recorder {
     this.acidDew = dew.acidDewPointK;
     this.water = new Float64Array(ctx.geometry.segments);
     this.acid = new Float64Array(ctx.geometry.segments);
-    this.airDensityPressurePa = airPressureAtElevation(ctx.inputs.site.elevationM);
+    this.airDensityPressurePa = ctx.sitePressurePa;
     this.reset();
   }
 
@@ -111,7 +113,7 @@ export class Recorder {
       this.acid[s] = this.acidDew === null ? Number.NaN : y[s * n]! - this.acidDew;
       gasSum += 0.5 * (diag.gasInK[s]! + diag.gasOutK[s]!);
     }
-    checkCorrelationRanges(inputs, mesh, y, diag, S, this.ranges);
+    checkCorrelationRanges(this.ctx, t, y, diag, this.ranges);
     for (const c of SERIES_SEGMENT_CHANNELS) {
       if (c === 'waterDewMarginK') this.seg[c].pushAll(this.water);
       else if (c === 'acidDewMarginK') this.seg[c].pushAll(this.acid);

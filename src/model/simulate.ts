@@ -190,7 +190,8 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     periodic,
     firingStartT: run.mode === 'warmup' ? t0 : null,
     integrator: { name: run.integrator, ...stats, computeMs: performance.now() - started, initialStateMs },
-    warnings: rec.ranges.warnings(),
+    warnings: rec.ranges.warnings((p) => `${p.heightM.toFixed(1)} m, ${clock.isoLocal(p.t)}`),
+    assumptions: rec.ranges.assumptions(),
   };
 }
 

@@ -16,10 +16,11 @@ import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../p
 import { gapConductancePerMetre } from '../physics/wall/gap.ts';
 import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
 import { airPropertiesAt } from '../physics/properties/air.ts';
-import type { GasPropertyLookup, MutableGasProperties } from '../physics/properties/flueGas.ts';
+import type { GasPropertyLookup } from '../physics/properties/flueGas.ts';
 import { flueSideOfSegment, emptyFlueSide, type FlueSideSpec } from '../physics/flue/inside.ts';
 import { outerBoundaryOfSegment, emptyOuterBoundary, type OuterSurfaceSpec, type OuterBoundaryOfSegment } from '../physics/outside/boundary.ts';
-import { gapConvectionRatio, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
+import { gapConvectionRatio, insideMixed, insideNaturalNusselt, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
+import { sitePressurePa } from './site.ts';
 
 export const AUX_GAS_TO_WALL = 0;
 export const AUX_CONVECTION = 1;
@@ -42,6 +43,16 @@ export const SEGMENT_CHANNELS = [
   'prandtlOutside',
   /** 1 where the slender-cylinder factor was applied outside, else 0. */
   'slenderOutside',
+  /** Inside: the forced and natural parts of the film (W/(m² K)), 1 where buoyancy aids the flow, the lining's Rayleigh number. */
+  'forcedFilmInside',
+  'naturalFilmInside',
+  'aidingInside',
+  'rayleighNaturalInside',
+  /** Inside: gas radiation as a film coefficient (W/(m² K)), gas emissivity, (p_H2O + p_CO2)·L (atm m), p_H2O/p_CO2. */
+  'radiationFilmInside',
+  'gasEmissivity',
+  'pathLengthAtmM',
+  'waterToCarbonDioxide',
 ] as const;
 
 export type SegmentChannel = (typeof SEGMENT_CHANNELS)[number];
@@ -85,8 +96,9 @@ export class StackWallSystem implements OdeSystem {
   private readonly flue = emptyFlueSide();
   private readonly outer: OuterBoundaryOfSegment = emptyOuterBoundary();
   private readonly film = airPropertiesAt(300);
-  private readonly gasProps: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
   private readonly outside = { airTemperatureK: 0, windSpeed: 0, skyTemperatureK: 0, groundTemperatureK: 0, sunPerMetre: 0 };
+  /** Atmospheric pressure at the site, Pa (outside air, air in gaps). */
+  readonly sitePressurePa: number;
   /** Instant and state fingerprint at which `innerSink`/`outerSink` were last computed (reused by `jacobian`). */
   private sinksT = Number.NaN;
   private sinksFingerprint = Number.NaN;
@@ -110,13 +122,26 @@ export class StackWallSystem implements OdeSystem {
     this.convectionOut = new Float64Array(geometry.segments);
     this.radiationOut = new Float64Array(geometry.segments);
     this.sunIn = new Float64Array(geometry.segments);
+    const flue = inputs.flue;
     this.flueSpec = {
       innerDiameter: geometry.innerDiameter,
       segmentLength: geometry.segmentLength,
-      filmCoefficient: inputs.flue.filmCoefficient,
-      gasCooling: inputs.flue.gasCooling,
+      filmCoefficient: flue.filmCoefficient,
+      gasCooling: flue.gasCooling,
       nusselt: insideTubeNusselt,
+      liningHeight: inputs.stack.height,
+      gas,
+      naturalNusselt: insideNaturalNusselt,
+      mixed: insideMixed,
+      radiation: flue.gasRadiation
+        ? {
+            waterPartialPressurePa: flue.composition.H2O * flue.pressurePa,
+            carbonDioxidePartialPressurePa: flue.composition.CO2 * flue.pressurePa,
+            wallEmissivity: inputs.layers[0]!.material.emissivity,
+          }
+        : null,
     };
+    this.sitePressurePa = sitePressurePa(inputs);
     this.surfaceSpec = {
       outerDiameter: geometry.outerDiameter,
       height: inputs.stack.height,
@@ -124,6 +149,7 @@ export class StackWallSystem implements OdeSystem {
       filmCoefficient: inputs.outside.filmCoefficient,
       radiation: inputs.outside.radiation,
       filmCorrelations: outsideFilmCorrelations,
+      pressurePa: this.sitePressurePa,
     };
   }
 
@@ -139,7 +165,7 @@ export class StackWallSystem implements OdeSystem {
           ? mesh.linkGeometry[i]! * mesh.linkConductivity[i]!(0.5 * (ta + tb))
           : kind === LINK_CONTACT
             ? mesh.linkGeometry[i]!
-            : gapConductancePerMetre(mesh.linkGap[i]!, ta, tb, gapConvectionRatio);
+            : gapConductancePerMetre(mesh.linkGap[i]!, ta, tb, gapConvectionRatio, this.sitePressurePa, this.geometry.segmentLength);
     }
   }
 
@@ -204,7 +230,7 @@ export class StackWallSystem implements OdeSystem {
 
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;
-      flueSideOfSegment(this.flueSpec, gasIn, y[o]!, d.massFlow, this.gas(gasIn, this.gasProps), flue);
+      flueSideOfSegment(this.flueSpec, gasIn, y[o]!, d.massFlow, flue);
       this.flueToWall[s] = flue.heatPerMetre;
       this.innerSink[s] = flue.sinkPerMetre;
 
@@ -234,6 +260,14 @@ export class StackWallSystem implements OdeSystem {
         diag.grashofOutside[s] = outer.grashof;
         diag.prandtlOutside[s] = outer.prandtl;
         diag.slenderOutside[s] = outer.slenderCorrected ? 1 : 0;
+        diag.forcedFilmInside[s] = flue.forcedFilm;
+        diag.naturalFilmInside[s] = flue.naturalFilm;
+        diag.aidingInside[s] = flue.aiding;
+        diag.rayleighNaturalInside[s] = flue.rayleighNatural;
+        diag.radiationFilmInside[s] = flue.radiationFilm;
+        diag.gasEmissivity[s] = flue.gasEmissivity;
+        diag.pathLengthAtmM[s] = flue.pathLengthAtmM;
+        diag.waterToCarbonDioxide[s] = flue.waterToCarbonDioxide;
       }
       gasIn = flue.gasOutK;
     }

@@ -108,6 +108,8 @@ export interface RunResult {
     readonly computeMs: number;
     readonly initialStateMs: number;
   };
-  /** Warnings gathered during the run (validity ranges, clamped values). */
+  /** Warnings gathered during the run: correlations used beyond their range without a justification (by how much and where). */
   readonly warnings: readonly string[];
+  /** Correlations used beyond their published range where the literature accepts it, once each. */
+  readonly assumptions: readonly string[];
 }

@@ -7,12 +7,15 @@ import { describeCorrelationsInUse, type CorrelationRole } from '../model/correl
 
 /** Plain words for each role. */
 const ROLE_WORDS: Record<CorrelationRole, string> = {
-  insideTube: 'Inside the flue (tube flow, bulk properties)',
+  insideTube: 'Inside the flue, forced flow (tube flow, bulk properties)',
+  insideNatural: 'Inside the flue, natural convection on the lining (vertical surface on the stack height, film properties)',
+  insideMixed: 'Inside the flue, forced and natural together',
+  gasRadiation: 'Inside the flue, radiation of the gas to the lining (when switched on)',
   outsideCrossFlow: 'Outside, wind (cylinder in cross flow, film properties)',
   outsideNatural: 'Outside, natural convection (vertical surface on the stack height, film properties)',
   outsideSlender: 'Outside, slender-cylinder correction (laminar natural convection only)',
   outsideMixed: 'Outside, forced and natural together',
-  gapConvection: 'Air gaps, natural convection',
+  gapConvection: 'Air gaps, natural convection across the vertical layer (aspect ratio: segment height / gap width)',
 };
 
 /** The correlations in use, one entry per role: the role in words and the registry's description. */

@@ -61,6 +61,14 @@ function count(min: number, max: number, description: string) {
   });
 }
 
+/** Twelve dimensionless monthly values within [min, max]. */
+function monthly(description: string, min: number, max: number) {
+  return z
+    .array(ratio(min, max, 'an optical depth', description))
+    .length(12, 'expected 12 values, January to December')
+    .meta({ description: `${description}: 12 values, January to December.` });
+}
+
 const clockTime = z
   .string()
   .meta({ description: 'Local clock time, "HH:MM" (00:00 to 24:00).' })
@@ -82,6 +90,7 @@ const site = z.strictObject({
   latitude: ratio(-90, 90, 'degrees north', 'Latitude, degrees north (negative south)'),
   longitude: ratio(-180, 180, 'degrees east', 'Longitude, degrees east (negative west)'),
   elevation: quantity('length', { min: -500, max: 9000, wording: 'an elevation between -500 m and 9000 m' }, 'Elevation above sea level').prefault(0),
+  pressure: quantity('pressure', { min: 30_000, max: 110_000, wording: 'a pressure from 30 kPa to 110 kPa' }, 'Atmospheric pressure at the site (default: the standard atmosphere at the elevation)').optional(),
   time_zone: z
     .string()
     .meta({ description: 'IANA time zone of the site, e.g. "Europe/Oslo".' })
@@ -94,7 +103,9 @@ const site = z.strictObject({
   terrain: z
     .union([z.enum(Object.keys(TERRAIN_EXPONENTS) as [Terrain, ...Terrain[]]), ratio(0.05, 0.6, 'a power-law exponent', 'Wind power-law exponent')])
     .default('suburban')
-    .meta({ description: `Terrain around the stack for the wind profile: ${Object.keys(TERRAIN_EXPONENTS).join(', ')}, or the power-law exponent itself.` }),
+    .meta({
+      description: `Terrain around the stack for the wind profile: ${Object.keys(TERRAIN_EXPONENTS).join(', ')} (the station's reading is converted by the two-terrain power law), or a power-law exponent applied to the reading directly.`,
+    }),
 });
 
 const propertyTable = (kind: 'conductivity' | 'specificHeat', description: string) =>
@@ -164,6 +175,18 @@ const outside = z.strictObject({
   sky: z.enum(Object.keys(SKY_MODELS) as [SkyModelName, ...SkyModelName[]]).default('berdahl-martin').meta({ description: 'Sky temperature model.' }),
   ground_temperature: temperature('Ground temperature (default: the air temperature)').optional(),
   sun: z.boolean().default(true).meta({ description: 'Apply absorbed sun.' }),
+  clear_sky: z
+    .union([
+      z.literal('ashrae-1985'),
+      z.strictObject({
+        ashrae_2009: z.strictObject({
+          tau_b: monthly('Beam optical depth τ_b of each month (the site\'s design-climate table), January first', 0.1, 1.5),
+          tau_d: monthly('Diffuse optical depth τ_d of each month, January first', 1, 4),
+        }),
+      }),
+    ])
+    .default('ashrae-1985')
+    .meta({ description: 'Clear-sky irradiance where the weather has none: "ashrae-1985" (monthly constants interpolated by day), or the 2009 model with the site\'s optical depths.' }),
 });
 
 const designDay = z.strictObject({
@@ -180,6 +203,10 @@ const weather = z
     design_day: designDay.optional(),
     file: z.string().min(1).optional().meta({ description: 'Hourly weather CSV, path relative to the scenario file.' }),
     wind_reference_height: quantity('length', { min: 0.5, max: 300, wording: 'a height from 0.5 m to 300 m' }, 'Height of the wind measurement').prefault(10),
+    wind_station_terrain: z
+      .enum(Object.keys(TERRAIN_EXPONENTS) as [Terrain, ...Terrain[]])
+      .default('open')
+      .meta({ description: 'Terrain around the anemometer (a weather station usually stands in open country).' }),
   })
   .check((ctx) => {
     const v = ctx.value;
@@ -263,6 +290,7 @@ const flue = z.strictObject({
     .union([z.literal('auto'), quantity('filmCoefficient', { min: 0, exclusiveMin: true, wording: 'a positive film coefficient' }, 'Fixed inside film coefficient')])
     .default('auto'),
   gas_cooling: z.boolean().default(true).meta({ description: 'Whether the gas cools as it rises (false: every height sees the inlet temperature).' }),
+  gas_radiation: z.boolean().default(true).meta({ description: 'Whether the H2O–CO2 flue gas radiates to the lining (weighted sum of grey gases).' }),
   pressure: quantity('pressure', { min: 50_000, max: 120_000, wording: 'a pressure from 50 kPa to 120 kPa' }, 'Absolute pressure in the flue (default: the site pressure)').optional(),
 });
 

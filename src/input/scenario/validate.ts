@@ -215,6 +215,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   if (problems.length > 0 || !weather || !composition) return null;
 
   const lining = layers[0]!.material;
+  const sitePressure = s.site.pressure ?? airPressureAtElevation(s.site.elevation);
   return {
     name: s.name,
     site: {
@@ -226,6 +227,8 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       startDate: s.site.first_day,
       groundReflectance: s.site.ground_reflectance,
       windExponent,
+      ...(typeof s.site.terrain === 'string' ? { siteTerrain: s.site.terrain, stationTerrain: s.weather.wind_station_terrain } : {}),
+      pressurePa: sitePressure,
     },
     stack: { height: s.stack.height, innerDiameter: s.stack.inner_diameter, segments: s.stack.segments },
     layers,
@@ -239,6 +242,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
             ? { kind: 'none' }
             : { kind: 'surroundings', temperatureK: s.outside.radiation.surroundings },
       sun: s.outside.sun,
+      clearSky: s.outside.clear_sky === 'ashrae-1985' ? { kind: 'ashrae-1985' } : { kind: 'ashrae-2009', tauBeam: s.outside.clear_sky.ashrae_2009.tau_b, tauDiffuse: s.outside.clear_sky.ashrae_2009.tau_d },
     },
     weather,
     flue: {
@@ -248,7 +252,8 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       properties: s.flue.properties,
       filmCoefficient: s.flue.film_coefficient === 'auto' ? undefined : s.flue.film_coefficient,
       gasCooling: s.flue.gas_cooling,
-      pressurePa: s.flue.pressure ?? airPressureAtElevation(s.site.elevation),
+      pressurePa: s.flue.pressure ?? sitePressure,
+      gasRadiation: s.flue.gas_radiation,
     },
     run: {
       mode: s.run.mode,

@@ -152,7 +152,8 @@ export const LINING_NATURAL_CONVECTION_RANGE = {
  * - Not included: the confinement of the boundary layer by the duct (its thickness stays well
  *   below the radius of a flue of a metre or more), and variation of ΔT along the height (the
  *   local ΔT of the segment is used with the whole height, common practice).
- * - Range data: {@link LINING_NATURAL_CONVECTION_RANGE}.
+ * - Range data: {@link LINING_NATURAL_CONVECTION_RANGE}. `nusseltOf` is the vertical-surface
+ *   correlation (default Churchill–Chu); `out` may be a scratch object (no allocation).
  *
  * Example: wall 150 °C, gas 200 °C, L = 60 m, air at T_f = 448.15 K (Incropera Table A.4:
  * k = 0.037170, μ = 2.49938e-5, ρ = 0.787632 at 1 atm, Pr = 0.686355) → ν = 3.17328e-5,
@@ -164,14 +165,24 @@ export function naturalConvectionLiningCoefficient(
   gasTemperatureK: number,
   height: number,
   gas: LiningFilmGas,
+  nusseltOf: (ra: number, pr: number) => number = nuVerticalPlateChurchillChu,
+  out: { h: number; rayleigh: number; nusselt: number } = { h: 0, rayleigh: 0, nusselt: 0 },
 ): LiningNaturalConvection {
   const deltaT = Math.abs(wallTemperatureK - gasTemperatureK);
-  if (deltaT === 0) return { h: 0, rayleigh: 0, nusselt: 0 };
+  if (deltaT === 0) {
+    out.h = 0;
+    out.rayleigh = 0;
+    out.nusselt = 0;
+    return out;
+  }
   const filmK = 0.5 * (wallTemperatureK + gasTemperatureK);
   const nu = gas.dynamicViscosity / gas.density;
   const rayleigh = (STANDARD_GRAVITY * deltaT * height * height * height * gas.prandtl) / (filmK * nu * nu);
-  const nusselt = nuVerticalPlateChurchillChu(rayleigh, gas.prandtl);
-  return { h: (nusselt * gas.conductivity) / height, rayleigh, nusselt };
+  const nusselt = nusseltOf(rayleigh, gas.prandtl);
+  out.h = (nusselt * gas.conductivity) / height;
+  out.rayleigh = rayleigh;
+  out.nusselt = nusselt;
+  return out;
 }
 
 /**

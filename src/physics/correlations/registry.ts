@@ -25,6 +25,9 @@ import {
   effectiveConductivityRatioAnnulusRaithbyHollands,
   rayleighAnnulusRaithbyHollands,
 } from './enclosure.ts';
+import { nuVerticalCavityElSherbiny, VERTICAL_CAVITY_ELSHERBINY_RANGE } from './cavity.ts';
+import { mixedConvectionChurchill, MIXED_CONVECTION_RANGE } from './internal.ts';
+import { gasEmissivityWsgg, WSGG_SMITH_1982 } from './gasRadiation.ts';
 
 /** Closed interval [min, max] of an input. */
 export type Range = readonly [min: number, max: number];
@@ -51,6 +54,19 @@ export interface CorrelationEntry<K extends string> {
   readonly ranges: Readonly<Partial<Record<K, Range>>>;
   /** Validity conditions on combinations of inputs. */
   readonly constraints: readonly Constraint<K>[];
+  /**
+   * Sides of the published range beyond which the literature accepts the extrapolation: such use is
+   * listed once in the run's assumptions, not warned about. Any other use beyond the range is a
+   * warning saying by how much and where.
+   */
+  readonly accepted?: readonly AcceptedExtrapolation<K>[];
+}
+
+/** An accepted extrapolation: beyond which bound of which input, and why it is accepted. */
+export interface AcceptedExtrapolation<K extends string> {
+  readonly input: K;
+  readonly side: 'above' | 'below';
+  readonly reason: string;
 }
 
 /** Builds an entry (its named-input `fn` from `compute`) and lets TypeScript infer the input names. */
@@ -82,6 +98,14 @@ export const CORRELATIONS = {
     // 10⁻¹ ≤ Ra_L ≤ 10¹² as quoted by Incropera & DeWitt (from memory).
     ranges: { ra: [0.1, 1e12], pr: [0, Infinity] },
     constraints: [],
+    accepted: [
+      {
+        input: 'ra',
+        side: 'above',
+        reason:
+          'the turbulent branch tends to Nu ∝ Ra^(1/3), which makes h independent of the height, as turbulent free-convection data on tall surfaces show; the accepted extrapolation for tall stacks (common practice)',
+      },
+    ],
   }),
   slenderCylinderFactorPopiel: entry({
     title: 'Popiel, Wojtkowiak & Bober (2007)',
@@ -171,6 +195,49 @@ export const CORRELATIONS = {
       },
     ],
   }),
+  nuVerticalCavityElSherbiny: entry({
+    title: 'ElSherbiny, Raithby & Hollands (1982) vertical air layer',
+    inputs: ['ra', 'aspectRatio'],
+    compute: nuVerticalCavityElSherbiny,
+    description:
+      'Nu across a vertical air layer, k_eff/k of the gap; Ra on the gap width, aspect ratio = segment height / gap width, properties at the mean gap temperature (air).',
+    source: VERTICAL_CAVITY_ELSHERBINY_RANGE.source,
+    ranges: { ra: VERTICAL_CAVITY_ELSHERBINY_RANGE.rayleigh, aspectRatio: VERTICAL_CAVITY_ELSHERBINY_RANGE.aspectRatio },
+    constraints: [],
+    accepted: [
+      { input: 'ra', side: 'below', reason: 'below the range the layer conducts (Nu → 1, exact)' },
+      { input: 'aspectRatio', side: 'above', reason: 'in taller layers only the aspect-independent terms remain, as expected for very tall slots' },
+    ],
+  }),
+  mixedConvectionChurchillSigned: entry({
+    title: 'Churchill (1977) mixed convection, aiding or opposing',
+    inputs: ['forced', 'natural', 'aiding'],
+    compute: (forced, natural, aiding) => mixedConvectionChurchill(forced, natural, aiding === 1),
+    description:
+      'Inside film of the forced flow and the natural convection on the lining together: (h_F³ + h_N³)^(1/3) aiding, |h_F³ − h_N³|^(1/3) opposing (aiding = 1 or 0).',
+    source: MIXED_CONVECTION_RANGE.source,
+    ranges: {},
+    constraints: [],
+  }),
+  gasEmissivityWsggSmith: entry({
+    title: 'Smith, Shen & Friedman (1982) weighted sum of grey gases',
+    inputs: ['temperature', 'pathLength', 'ratio'],
+    compute: (temperature, pathLength, ratio) => gasEmissivityWsgg(temperature, pathLength, ratio, WSGG_SMITH_1982),
+    description:
+      'Total emissivity of the H2O–CO2 flue gas (absorptivity with the weights at the wall temperature), mean beam length 0.95 D; exchange with the grey lining σ(ε_w + 1)/2 (ε_g T_g⁴ − α_g T_w⁴). Temperature in K, path length (p_H2O + p_CO2)·L in atm·m, ratio p_H2O/p_CO2.',
+    source: WSGG_SMITH_1982.source,
+    ranges: { temperature: WSGG_SMITH_1982.range.temperatureK, pathLength: WSGG_SMITH_1982.range.pathLengthAtmM, ratio: WSGG_SMITH_1982.range.ratio },
+    constraints: [],
+    accepted: [
+      {
+        input: 'temperature',
+        side: 'below',
+        reason: 'below 600 K the fit agrees with the line-by-line based fit of Dorigon et al. (2013, valid from 400 K) within 7.4 % (checked in this project)',
+      },
+      { input: 'ratio', side: 'above', reason: 'the nearer fit (ratio 2) is used; water-rich gas radiates more, not less' },
+      { input: 'ratio', side: 'below', reason: 'the nearer fit (ratio 1) is used' },
+    ],
+  }),
 } as const;
 
 export type CorrelationName = keyof typeof CORRELATIONS;
@@ -246,39 +313,129 @@ export function describeCorrelation(name: CorrelationName): string {
   return `${e.title}: ${e.description}${validity.length ? ` Published range: ${validity.join(', ')}.` : ''} Source: ${e.source}.`;
 }
 
+/** How one evaluation relates to its correlation's published range. */
+export type RangeStatus =
+  | { readonly kind: 'inside' }
+  /** Beyond the range only where the literature accepts the extrapolation. */
+  | { readonly kind: 'accepted'; readonly input: string; readonly side: 'above' | 'below'; readonly value: number; readonly bound: number; readonly reason: string }
+  /** Beyond the range (or a condition) where the extrapolation is not justified; `excess` is how far beyond, relative to the bound. */
+  | { readonly kind: 'outside'; readonly what: string; readonly excess: number };
+
+/** Where an evaluation was: run time and height, for messages. */
+export interface EvaluationPlace {
+  readonly t: number;
+  readonly heightM: number;
+}
+
+/** Classify one evaluation of `name` against its published range and its accepted extrapolations. */
+export function rangeStatus<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>): RangeStatus {
+  const e = looseEntry(name);
+  const values = inputs as Readonly<Record<string, number>>;
+  let accepted: RangeStatus | null = null;
+  for (const key of e.inputs) {
+    const v = values[key];
+    if (typeof v !== 'number' || Number.isNaN(v)) return { kind: 'outside', what: `${key} is not a number`, excess: Infinity };
+    const range = e.ranges[key];
+    if (!range || (v >= range[0] && v <= range[1])) continue;
+    const side = v < range[0] ? 'below' : 'above';
+    const bound = side === 'below' ? range[0] : range[1];
+    const ok = e.accepted?.find((a) => a.input === key && a.side === side);
+    if (ok) {
+      accepted ??= { kind: 'accepted', input: key, side, value: v, bound, reason: ok.reason };
+      continue;
+    }
+    const excess = bound === 0 ? Math.abs(v) : Math.abs(v - bound) / Math.abs(bound);
+    return { kind: 'outside', what: `${key} = ${formatNumber(v)} ${side} its published range [${formatNumber(range[0])}, ${formatNumber(range[1])}]`, excess };
+  }
+  for (const c of e.constraints) if (!c.holds(values)) return { kind: 'outside', what: `violates ${c.label}`, excess: Infinity };
+  return accepted ?? { kind: 'inside' };
+}
+
+interface TallyEntry {
+  checked: number;
+  accepted: number;
+  outside: number;
+  /** The accepted extrapolation seen (first), with the farthest value. */
+  acceptedExample: Extract<RangeStatus, { kind: 'accepted' }> | null;
+  farthestAccepted: number;
+  /** The worst unjustified extrapolation and where it was. */
+  worst: { what: string; excess: number; place: EvaluationPlace } | null;
+}
+
 /**
- * Counts, per correlation, the evaluations checked and those outside the published range, keeping
- * the first warning of each; `warnings()` gives one line per correlation used beyond its range.
+ * Counts, per correlation, the evaluations checked, those beyond the range where the extrapolation
+ * is accepted, and those where it is not (keeping the worst and where it was): `assumptions()` lists
+ * each accepted extrapolation once, `warnings()` says for each unjustified one by how much and where.
  */
 export class CorrelationRangeTally {
-  private readonly seen = new Map<CorrelationName, { checked: number; outside: number; example: string }>();
+  private readonly seen = new Map<CorrelationName, TallyEntry>();
 
-  /** Check one evaluation of `name` with these inputs. */
-  note<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>): void {
-    const warning = checkValidity(name, inputs);
-    const v = this.seen.get(name) ?? { checked: 0, outside: 0, example: '' };
-    v.checked++;
-    if (warning) {
-      v.outside++;
-      if (!v.example) v.example = warning;
+  /** Check one evaluation of `name` with these inputs, made at `place`. */
+  note<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>, place: EvaluationPlace = { t: Number.NaN, heightM: Number.NaN }): void {
+    const status = rangeStatus(name, inputs);
+    let v = this.seen.get(name);
+    if (!v) {
+      v = { checked: 0, accepted: 0, outside: 0, acceptedExample: null, farthestAccepted: Number.NaN, worst: null };
+      this.seen.set(name, v);
     }
-    this.seen.set(name, v);
+    v.checked++;
+    if (status.kind === 'accepted') {
+      v.accepted++;
+      if (!v.acceptedExample) {
+        v.acceptedExample = status;
+        v.farthestAccepted = status.value;
+      } else if (status.input === v.acceptedExample.input && status.side === v.acceptedExample.side) {
+        v.farthestAccepted = status.side === 'above' ? Math.max(v.farthestAccepted, status.value) : Math.min(v.farthestAccepted, status.value);
+      }
+    } else if (status.kind === 'outside') {
+      v.outside++;
+      if (!v.worst || status.excess > v.worst.excess) v.worst = { what: status.what, excess: status.excess, place };
+    }
   }
 
-  /** How many evaluations of `name` were checked and how many were outside the range. */
-  counts(name: CorrelationName): { checked: number; outside: number } {
+  /** How many evaluations of `name` were checked, accepted beyond the range, and outside it. */
+  counts(name: CorrelationName): { checked: number; accepted: number; outside: number } {
     const v = this.seen.get(name);
-    return { checked: v?.checked ?? 0, outside: v?.outside ?? 0 };
+    return { checked: v?.checked ?? 0, accepted: v?.accepted ?? 0, outside: v?.outside ?? 0 };
   }
 
-  /** One warning per correlation used outside its published range, with how often. */
-  warnings(): string[] {
+  /** One line per correlation used beyond its range where the literature accepts it (for the report's assumptions). */
+  assumptions(): string[] {
     const out: string[] = [];
-    for (const [, v] of this.seen) {
-      if (v.outside === 0) continue;
-      const pct = (100 * v.outside) / v.checked;
-      out.push(`correlation outside its published range at ${pct < 1 ? pct.toFixed(2) : pct.toFixed(0)} % of the output points (first: ${v.example})`);
+    for (const [name, v] of this.seen) {
+      const a = v.acceptedExample;
+      if (v.accepted === 0 || !a) continue;
+      const e = looseEntry(name);
+      out.push(
+        `${e.title} is used ${a.side} its published range (${a.input} ${a.side === 'above' ? '>' : '<'} ${formatNumber(a.bound)}, up to ${formatNumber(v.farthestAccepted)}) at ${share(v.accepted, v.checked)} of the reported points: accepted because ${a.reason}.`,
+      );
     }
     return out;
   }
+
+  /** One warning per correlation used beyond its range without a justification: the worst case, by how much, where and how often. */
+  warnings(describePlace: (place: EvaluationPlace) => string = defaultPlace): string[] {
+    const out: string[] = [];
+    for (const [name, v] of this.seen) {
+      if (v.outside === 0 || !v.worst) continue;
+      const e = looseEntry(name);
+      const by = Number.isFinite(v.worst.excess) ? ` (by ${formatPercent(v.worst.excess)})` : '';
+      out.push(`${e.title}: ${v.worst.what}${by} at ${describePlace(v.worst.place)}; beyond its range at ${share(v.outside, v.checked)} of the reported points, value extrapolated (${e.source})`);
+    }
+    return out;
+  }
+}
+
+function defaultPlace(place: EvaluationPlace): string {
+  return Number.isFinite(place.heightM) ? `${formatNumber(place.heightM)} m` : 'an unrecorded place';
+}
+
+function share(part: number, whole: number): string {
+  const pct = (100 * part) / whole;
+  return `${pct < 1 ? pct.toFixed(2) : pct.toFixed(0)} %`;
+}
+
+function formatPercent(fraction: number): string {
+  const pct = 100 * fraction;
+  return pct >= 100 ? `${formatNumber(fraction + 1)}×` : `${pct < 1 ? pct.toFixed(2) : pct.toFixed(0)} %`;
 }

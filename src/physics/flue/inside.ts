@@ -2,15 +2,26 @@
  * The flue side of one axial segment: the inside film coefficient, the gas crossing the segment
  * and the heat it gives the inner surface, with the derivative the implicit integrator needs.
  *
- *   Re = 4 ṁ / (π D μ),  h = Nu(Re, Pr) k / D  (or a fixed h),  bulk properties at the segment's
- *   inlet gas temperature;
+ *   Re = 4 ṁ / (π D μ),  h_F = Nu(Re, Pr) k / D,  bulk properties at the segment's inlet gas
+ *   temperature;
+ *   natural convection on the lining, h_N (a vertical-surface correlation on the stack height at the
+ *   gas–wall difference, film properties), combined with h_F as Churchill's aiding (wall warmer than
+ *   the gas: its layer rises with the flow) or opposing sum; opposing only with laminar forced flow,
+ *   since in turbulent pipe flow opposing buoyancy raises heat transfer rather than lowering it
+ *   (Jackson, Cotton & Axcell 1989, from memory) — there the aiding sum is used;
+ *   or a fixed h given by the user (then nothing else);
+ *   gas radiation (optional): H2O–CO2 weighted-sum-of-grey-gases exchange with the grey lining,
+ *   mean beam length 0.95 D, as a radiative film coefficient added to the convective one;
  *   gas cooling on:  the quasi-steady march of `marchThroughSegment` (T_out, Q = ṁ c_p (T_in − T_w) ε);
  *   gas cooling off: every segment sees the inlet temperature, q' = h π D (T_in − T_w).
  *
  * SI units: K, kg/s, m, W/m (per metre of stack height), W/(m K). Pure apart from writing `out`.
  */
-import type { GasProperties } from '../properties/flueGas.ts';
+import type { GasPropertyLookup, MutableGasProperties } from '../properties/flueGas.ts';
 import { marchThroughSegment, type SegmentMarch } from './march.ts';
+import { naturalConvectionLiningCoefficient } from '../correlations/internal.ts';
+import { flueGasRadiation, meanBeamLengthLongCylinder } from '../correlations/gasRadiation.ts';
+import { RE_LAMINAR_LIMIT } from '../correlations/internal.ts';
 
 /** What stays fixed for the whole run on the flue side of a segment. */
 export interface FlueSideSpec {
@@ -24,6 +35,22 @@ export interface FlueSideSpec {
   readonly gasCooling: boolean;
   /** Tube Nusselt number on the inner diameter from (Re, Pr), bulk properties. */
   readonly nusselt: (re: number, pr: number) => number;
+  /** Height of the lining, m (length of its natural convection). */
+  readonly liningHeight: number;
+  /** Vertical-surface Nusselt number on the height from (Ra, Pr), film properties. */
+  readonly naturalNusselt: (ra: number, pr: number) => number;
+  /** Combination of forced and natural film coefficients (aiding = 1, opposing = 0). */
+  readonly mixed: (forced: number, natural: number, aiding: number) => number;
+  /** Properties of the flue gas at a temperature. */
+  readonly gas: GasPropertyLookup;
+  /** Gas radiation to the lining, or null when it is off. */
+  readonly radiation: {
+    /** Partial pressures of H2O and CO2, Pa. */
+    readonly waterPartialPressurePa: number;
+    readonly carbonDioxidePartialPressurePa: number;
+    /** Emissivity of the lining, –. */
+    readonly wallEmissivity: number;
+  } | null;
 }
 
 /** The flue side of one segment at one instant. */
@@ -34,8 +61,20 @@ export interface FlueSideOfSegment {
   heatPerMetre: number;
   /** −∂(heatPerMetre)/∂T_inner, W/(m K) (≥ 0), for the Jacobian. */
   sinkPerMetre: number;
-  /** Inside film coefficient, W/(m² K). */
+  /** Inside film coefficient (convection, forced and natural together), W/(m² K). */
   filmCoefficient: number;
+  /** Forced and natural parts of it, W/(m² K), and whether buoyancy aids the flow (1) or opposes it (0). */
+  forcedFilm: number;
+  naturalFilm: number;
+  aiding: number;
+  /** Rayleigh number of the lining's natural convection on the height, –. */
+  rayleighNatural: number;
+  /** Gas radiation to the lining as a film coefficient on (T_gas − T_wall), W/(m² K) (0 when off). */
+  radiationFilm: number;
+  /** Gas emissivity, path length (p_H2O + p_CO2)·L in atm·m and p_H2O/p_CO2 (NaN when off). */
+  gasEmissivity: number;
+  pathLengthAtmM: number;
+  waterToCarbonDioxide: number;
   /** Reynolds number on the inner diameter, –. */
   reynolds: number;
   /** Prandtl number of the gas, –. */
@@ -43,32 +82,81 @@ export interface FlueSideOfSegment {
 }
 
 export function emptyFlueSide(): FlueSideOfSegment {
-  return { gasOutK: 0, heatPerMetre: 0, sinkPerMetre: 0, filmCoefficient: 0, reynolds: 0, prandtl: 0 };
+  return {
+    gasOutK: 0, heatPerMetre: 0, sinkPerMetre: 0, filmCoefficient: 0, forcedFilm: 0, naturalFilm: 0, aiding: 0, rayleighNatural: 0,
+    radiationFilm: 0, gasEmissivity: Number.NaN, pathLengthAtmM: Number.NaN, waterToCarbonDioxide: Number.NaN, reynolds: 0, prandtl: 0,
+  };
 }
 
 const march: SegmentMarch = { gasOutK: 0, heatW: 0, conductanceWPerK: 0 };
+const natural = { h: 0, rayleigh: 0, nusselt: 0 };
+const bulk: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
+const film: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
+const mean: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
 
 /**
- * Flue side of one segment: gas entering at `gasInK` with mass flow `massFlow` (kg/s) and bulk
- * properties `gas` (at gasInK), inner surface at `wallK`. Fills and returns `out`.
+ * Flue side of one segment: gas entering at `gasInK` with mass flow `massFlow` (kg/s), inner
+ * surface at `wallK`. Transport properties at the inlet (bulk) and at the mean of gas and wall
+ * (film); the heat the gas gives is ṁ c_p (T_in − T_out) with c_p at the segment's mean gas
+ * temperature (the midpoint rule for the enthalpy change, so that the wall gets what the gas loses
+ * to second order in the segment's temperature drop). Fills and returns `out`.
  * Example: D 1.4 m, Δz 3.75 m, ṁ 3.2 kg/s, μ 2.5e-5 Pa s → Re = 4·3.2/(π·1.4·2.5e-5) = 116 410.
  */
-export function flueSideOfSegment(spec: FlueSideSpec, gasInK: number, wallK: number, massFlow: number, gas: GasProperties, out: FlueSideOfSegment): FlueSideOfSegment {
+export function flueSideOfSegment(spec: FlueSideSpec, gasInK: number, wallK: number, massFlow: number, out: FlueSideOfSegment): FlueSideOfSegment {
   const di = spec.innerDiameter;
+  const gas = spec.gas(gasInK, bulk);
   const dz = spec.segmentLength;
   const reynolds = (4 * massFlow) / (Math.PI * di * gas.dynamicViscosity);
-  const h = spec.filmCoefficient ?? (spec.nusselt(reynolds, gas.prandtl) * gas.conductivity) / di;
+  let h: number;
+  if (spec.filmCoefficient !== undefined) {
+    h = spec.filmCoefficient;
+    out.forcedFilm = h;
+    out.naturalFilm = 0;
+    out.aiding = 1;
+    out.rayleighNatural = Number.NaN;
+  } else {
+    const forced = (spec.nusselt(reynolds, gas.prandtl) * gas.conductivity) / di;
+    naturalConvectionLiningCoefficient(wallK, gasInK, spec.liningHeight, spec.gas(0.5 * (gasInK + wallK), film), spec.naturalNusselt, natural);
+    // opposing buoyancy lowers the film only in laminar forced flow (see the module comment)
+    const aiding = wallK > gasInK || reynolds > RE_LAMINAR_LIMIT ? 1 : 0;
+    h = spec.mixed(forced, natural.h, aiding);
+    out.forcedFilm = forced;
+    out.naturalFilm = natural.h;
+    out.aiding = aiding;
+    out.rayleighNatural = natural.rayleigh;
+  }
+  let hRadiation = 0;
+  if (spec.radiation) {
+    const r = flueGasRadiation({
+      gasTemperatureK: gasInK,
+      wallTemperatureK: wallK,
+      waterPartialPressurePa: spec.radiation.waterPartialPressurePa,
+      carbonDioxidePartialPressurePa: spec.radiation.carbonDioxidePartialPressurePa,
+      beamLengthM: meanBeamLengthLongCylinder(di),
+      wallEmissivity: spec.radiation.wallEmissivity,
+    });
+    // as a film coefficient on the gas–wall difference (its slope where the two are equal); never
+    // negative (the grey-gas weights at two temperatures can leave a tiny wrong-signed residue there)
+    const dT = gasInK - wallK;
+    hRadiation = Math.max(0, Math.abs(dT) > 0.01 ? r.flux / dT : -r.dFluxdWallK);
+    out.gasEmissivity = r.emissivity;
+    out.pathLengthAtmM = r.pathLengthAtmM;
+    out.waterToCarbonDioxide = r.ratio;
+  }
+  const hTotal = h + hRadiation;
   if (spec.gasCooling) {
-    marchThroughSegment(gasInK, wallK, h * Math.PI * di * dz, massFlow * gas.specificHeat, march);
+    marchThroughSegment(gasInK, wallK, hTotal * Math.PI * di * dz, massFlow * gas.specificHeat, march);
+    const cpMean = spec.gas(0.5 * (gasInK + march.gasOutK), mean).specificHeat;
     out.gasOutK = march.gasOutK;
-    out.heatPerMetre = march.heatW / dz;
+    out.heatPerMetre = (massFlow * cpMean * (gasInK - march.gasOutK)) / dz;
     out.sinkPerMetre = march.conductanceWPerK / dz;
   } else {
     out.gasOutK = gasInK;
-    out.heatPerMetre = h * Math.PI * di * (gasInK - wallK);
-    out.sinkPerMetre = h * Math.PI * di;
+    out.heatPerMetre = hTotal * Math.PI * di * (gasInK - wallK);
+    out.sinkPerMetre = hTotal * Math.PI * di;
   }
   out.filmCoefficient = h;
+  out.radiationFilm = hRadiation;
   out.reynolds = reynolds;
   out.prandtl = gas.prandtl;
   return out;

@@ -9,27 +9,31 @@
  */
 import { airPropertiesInto, type AirProperties } from '../properties/air.ts';
 import { outsideFilmCoefficientInto, type OutsideFilmCorrelations, type OutsideFilmResult } from '../correlations/external.ts';
-import {
-  radiationCoefficientToSkyAndGround,
-  radiationToSkyAndGround,
-  skyEmissivityBerdahlMartin,
-  skyEmissivityCloudCorrection,
-  skyTemperatureFromEmissivity,
-  skyTemperatureSwinbank,
-} from '../correlations/radiation.ts';
+import { radiationCoefficientToSkyAndGround, radiationToSkyAndGround, skyEmissivityBerdahlMartin } from '../correlations/radiation.ts';
+import { skyEmissivityCloudy, skyEmissivitySwinbank, skyTemperatureVerticalSurface } from './sky.ts';
 import type { AirState } from './weather.ts';
 
 /**
- * Sky models by name: the effective sky temperature from the outside air at one instant, K. The
- * scenario's list of sky models is read from this table.
+ * Clear-sky models by name: the HEMISPHERICAL clear-sky emissivity from the outside air at one
+ * instant. The scenario's list of sky models is read from this table. Cloud cover and the view of
+ * a vertical wall are applied to every model alike (`skyTemperatureSeenByWall`).
  */
 export const SKY_MODELS = {
-  /** Berdahl & Martin (1984) clear-sky emissivity from the dew point, Clark & Allen (1978) cloud factor. */
-  'berdahl-martin': (air: AirState): number =>
-    skyTemperatureFromEmissivity(Math.min(1, skyEmissivityCloudCorrection(skyEmissivityBerdahlMartin(air.dewPointK), air.cloudCover)), air.airTemperatureK),
-  /** Swinbank (1963) clear sky from the air temperature alone. */
-  swinbank: (air: AirState): number => skyTemperatureSwinbank(air.airTemperatureK),
+  /** Berdahl & Martin (1984), from the dew point. */
+  'berdahl-martin': (air: AirState): number => skyEmissivityBerdahlMartin(air.dewPointK),
+  /** Swinbank (1963), from the air temperature alone (as an emissivity, (T_sky/T_air)⁴). */
+  swinbank: (air: AirState): number => skyEmissivitySwinbank(air.airTemperatureK),
 } as const satisfies Record<string, (air: AirState) => number>;
+
+/**
+ * The sky temperature a VERTICAL wall sees, K: the model's clear-sky emissivity, raised for cloud
+ * cover (Clark & Allen 1978, capped at 1), then split between sky and near-horizon air by the
+ * sky-view share of a vertical surface (McClellan & Pedersen 1997; physics/outside/sky.ts).
+ */
+export function skyTemperatureSeenByWall(model: SkyModelName, air: AirState): number {
+  const cloudy = Math.min(1, skyEmissivityCloudy(SKY_MODELS[model](air), air.cloudCover));
+  return skyTemperatureVerticalSurface(cloudy, air.airTemperatureK);
+}
 
 export type SkyModelName = keyof typeof SKY_MODELS;
 
@@ -55,7 +59,7 @@ export interface Surroundings {
 export function surroundingTemperatures(radiation: OutsideRadiation, air: AirState, out: Surroundings): Surroundings {
   switch (radiation.kind) {
     case 'sky-ground':
-      out.skyTemperatureK = SKY_MODELS[radiation.sky](air);
+      out.skyTemperatureK = skyTemperatureSeenByWall(radiation.sky, air);
       out.groundTemperatureK = radiation.groundTemperatureK ?? air.airTemperatureK;
       break;
     case 'surroundings':
@@ -83,6 +87,8 @@ export interface OuterSurfaceSpec {
   readonly radiation: OutsideRadiation;
   /** The film correlations (forced, natural, slender, mixed) the model selected. */
   readonly filmCorrelations: OutsideFilmCorrelations;
+  /** Atmospheric pressure at the site, Pa (air properties of the film). */
+  readonly pressurePa: number;
 }
 
 /** Conditions outside one segment at one instant. */
@@ -146,7 +152,7 @@ export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number,
     out.prandtl = Number.NaN;
     out.slenderCorrected = false;
   } else {
-    const air = airPropertiesInto(film, 0.5 * (surfaceK + c.airTemperatureK));
+    const air = airPropertiesInto(film, 0.5 * (surfaceK + c.airTemperatureK), spec.pressurePa);
     const f = outsideFilmCoefficientInto(c.windSpeed, spec.outerDiameter, spec.height, surfaceK, c.airTemperatureK, air, spec.filmCorrelations, filmResult);
     h = f.h;
     out.reynolds = f.re;

@@ -86,19 +86,8 @@ export interface AshraeClearSkyConstants {
  */
 export function ashraeClearSkyConstantsOnDay(dayOfYear: number): AshraeClearSkyConstants {
   if (!Number.isFinite(dayOfYear)) throw new RangeError(`day of year ${dayOfYear} is not a finite number`);
-  const days = ASHRAE_REFERENCE_DAYS;
-  let d = ((((dayOfYear - 1) % 365) + 365) % 365) + 1; // 1 ≤ d < 366
-  let i = days.length - 1; // interval [days[i], days[i + 1]); the last one wraps to next January
-  for (let k = 0; k < days.length - 1; k++) {
-    if (d >= days[k] && d < days[k + 1]) i = k;
-  }
-  if (d < days[0]) d += 365;
-  const j = (i + 1) % 12;
-  const from = days[i];
-  const to = j === 0 ? days[0] + 365 : days[j];
-  const f = (d - from) / (to - from);
   const { A, B, C } = ASHRAE_CLEAR_SKY;
-  return { A: A[i] + f * (A[j] - A[i]), B: B[i] + f * (B[j] - B[i]), C: C[i] + f * (C[j] - C[i]) };
+  return { A: monthlyValueOnDay(A, dayOfYear), B: monthlyValueOnDay(B, dayOfYear), C: monthlyValueOnDay(C, dayOfYear) };
 }
 
 /**
@@ -319,18 +308,53 @@ export function solarMonth(utcMs: number, longitudeDeg: number): number {
 }
 
 /**
+ * The clear-sky model used where the weather does not measure irradiance: ASHRAE (1985) with its
+ * monthly constants interpolated by day ({@link clearSkyAshraeOnDay}), or ASHRAE (2009) with the
+ * site's monthly beam and diffuse optical depths from a design-climate table (values for the 21st
+ * of each month, interpolated by day the same way).
+ */
+export type ClearSkyModel =
+  | { readonly kind: 'ashrae-1985' }
+  | { readonly kind: 'ashrae-2009'; readonly tauBeam: readonly number[]; readonly tauDiffuse: readonly number[] };
+
+/**
+ * A value tabulated for the 21st of each month (`monthly[0]` January), linear in the day of the year
+ * between the reference days and across the new year (as {@link ashraeClearSkyConstantsOnDay}).
+ * Example: values 1…12, day 90.5 → 3 + 10.5/31 = 3.3387.
+ */
+export function monthlyValueOnDay(monthly: readonly number[], dayOfYear: number): number {
+  const days = ASHRAE_REFERENCE_DAYS;
+  let d = ((((dayOfYear - 1) % 365) + 365) % 365) + 1;
+  let i = days.length - 1;
+  for (let k = 0; k < days.length - 1; k++) if (d >= days[k] && d < days[k + 1]) i = k;
+  if (d < days[0]) d += 365;
+  const j = (i + 1) % 12;
+  const from = days[i];
+  const to = j === 0 ? days[0] + 365 : days[j];
+  return monthly[i]! + ((d - from) / (to - from)) * (monthly[j]! - monthly[i]!);
+}
+
+/** Clear-sky beam normal and diffuse horizontal irradiance of `model` on a day at a sun altitude, W/m². */
+export function clearSkyIrradiance(model: ClearSkyModel, dayOfYear: number, altitudeDeg: number): Irradiance {
+  if (model.kind === 'ashrae-1985') return clearSkyAshraeOnDay(dayOfYear, altitudeDeg);
+  return clearSkyAshrae2009(dayOfYear, altitudeDeg, monthlyValueOnDay(model.tauBeam, dayOfYear), monthlyValueOnDay(model.tauDiffuse, dayOfYear));
+}
+
+const DEFAULT_CLEAR_SKY: ClearSkyModel = { kind: 'ashrae-1985' };
+
+/**
  * Sun position and irradiance at the UTC instant `utcMs` at a site: measured beam normal / diffuse
  * horizontal from `air` where present (each replaces its own modelled value; a measured beam is
- * zeroed with the sun at or below the horizon), else the ASHRAE clear-sky values reduced for
- * `air.cloudCover` by Kasten & Czeplak.
+ * zeroed with the sun at or below the horizon), else the clear-sky values of `clearSky` (default
+ * ASHRAE 1985, constants interpolated by day) reduced for `air.cloudCover` by Kasten & Czeplak.
  */
-export function solarAt(utcMs: number, site: SiteLocation, air: AirState): SolarState {
+export function solarAt(utcMs: number, site: SiteLocation, air: AirState, clearSky: ClearSkyModel = DEFAULT_CLEAR_SKY): SolarState {
   const { altitudeDeg, azimuthDeg } = sunPosition(utcMs, site.latitudeDeg, site.longitudeDeg);
   const hasBeam = air.beamNormal !== undefined;
   const hasDiffuse = air.diffuseHorizontal !== undefined;
   let modelled: Irradiance = { beamNormal: 0, diffuseHorizontal: 0 };
   if (!(hasBeam && hasDiffuse)) {
-    modelled = cloudReducedIrradiance(clearSkyAshrae(solarMonth(utcMs, site.longitudeDeg), altitudeDeg), altitudeDeg, air.cloudCover);
+    modelled = cloudReducedIrradiance(clearSkyIrradiance(clearSky, solarDayOfYear(utcMs, site.longitudeDeg), altitudeDeg), altitudeDeg, air.cloudCover);
   }
   const up = altitudeDeg > 0;
   const beamNormal = up ? (hasBeam ? (air.beamNormal as number) : modelled.beamNormal) : 0;

@@ -20,6 +20,10 @@ import {
   NU_PIPE_LAMINAR_CONSTANT_WALL,
 } from '../../../src/physics/correlations/internal.ts';
 import { effectiveConductivityRatioAnnulusRaithbyHollands } from '../../../src/physics/correlations/enclosure.ts';
+import { nuVerticalCavityElSherbiny } from '../../../src/physics/correlations/cavity.ts';
+import { mixedConvectionChurchill } from '../../../src/physics/correlations/internal.ts';
+import { gasEmissivityWsgg, WSGG_SMITH_1982 } from '../../../src/physics/correlations/gasRadiation.ts';
+import { CorrelationRangeTally, rangeStatus } from '../../../src/physics/correlations/registry.ts';
 
 /** Inputs inside every published range, and the direct call each table entry must reproduce. */
 const CASES: { [N in CorrelationName]: { inputs: CorrelationInputs<N>; direct: () => number } } = {
@@ -46,6 +50,15 @@ const CASES: { [N in CorrelationName]: { inputs: CorrelationInputs<N>; direct: (
   effectiveConductivityRatioAnnulusRaithbyHollands: {
     inputs: { innerDiameter: 1, outerDiameter: 1.1, rayleighGap: 1e6, pr: 0.7 },
     direct: () => effectiveConductivityRatioAnnulusRaithbyHollands(1, 1.1, 1e6, 0.7),
+  },
+  nuVerticalCavityElSherbiny: { inputs: { ra: 1e5, aspectRatio: 20 }, direct: () => nuVerticalCavityElSherbiny(1e5, 20) },
+  mixedConvectionChurchillSigned: {
+    inputs: { forced: 5, natural: 3, aiding: 0 },
+    direct: () => mixedConvectionChurchill(5, 3, false),
+  },
+  gasEmissivityWsggSmith: {
+    inputs: { temperature: 1000, pathLength: 0.3, ratio: 2 },
+    direct: () => gasEmissivityWsgg(1000, 0.3, 2, WSGG_SMITH_1982),
   },
 };
 
@@ -118,5 +131,36 @@ describe('checkValidity', () => {
 
   it('reports a NaN input', () => {
     expect(checkValidity('nuPipeBlended', { re: Number.NaN, pr: 0.7 })).toMatch(/not a number/);
+  });
+});
+
+describe('extrapolation: accepted, or warned with how far and where', () => {
+  it('Churchill–Chu above Ra = 1e12 is an accepted extrapolation (the turbulent Ra^(1/3) asymptote), not a warning', () => {
+    // common practice for tall stacks: Ra_H ~ 1e14 on every real stack
+    expect(rangeStatus('nuVerticalPlateChurchillChu', { ra: 2e14, pr: 0.7 }).kind).toBe('accepted');
+    const tally = new CorrelationRangeTally();
+    for (let i = 0; i < 10; i++) tally.note('nuVerticalPlateChurchillChu', { ra: 1e13 * (i + 1), pr: 0.7 }, { t: 0, heightM: 5 });
+    expect(tally.warnings()).toEqual([]);
+    const [line] = tally.assumptions();
+    expect(line).toMatch(/Churchill–Chu \(1975\) is used above its published range \(ra > 1\.00e\+12, up to 1\.00e\+14\) at 100 % of the reported points: accepted because/);
+  });
+
+  it('an unjustified extrapolation is a warning naming the worst value, by how much, where and how often', () => {
+    const tally = new CorrelationRangeTally();
+    tally.note('nuPipeGnielinski', { re: 1e5, pr: 0.7 }, { t: 0, heightM: 1 });
+    tally.note('nuPipeGnielinski', { re: 2000, pr: 0.7 }, { t: 3600, heightM: 2.5 }); // 33 % below 3000
+    tally.note('nuPipeGnielinski', { re: 2700, pr: 0.7 }, { t: 7200, heightM: 4 }); // 10 % below
+    const warnings = tally.warnings((p) => `${p.heightM} m, t = ${p.t} s`);
+    expect(warnings).toHaveLength(1);
+    expect(warnings[0]).toMatch(/Gnielinski \(1976\): re = 2000 below its published range \[3000, 5\.00e\+6\] \(by 33 %\) at 2\.5 m, t = 3600 s; beyond its range at 67 % of the reported points/);
+    expect(tally.assumptions()).toEqual([]);
+  });
+
+  it('stays silent inside the range', () => {
+    const tally = new CorrelationRangeTally();
+    tally.note('nuCylinderChurchillBernstein', { re: 5e4, pr: 0.71 });
+    expect(tally.warnings()).toEqual([]);
+    expect(tally.assumptions()).toEqual([]);
+    expect(tally.counts('nuCylinderChurchillBernstein')).toEqual({ checked: 1, accepted: 0, outside: 0 });
   });
 });

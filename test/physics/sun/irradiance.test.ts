@@ -145,7 +145,8 @@ describe('solarAt', () => {
     const clear = solarAt(noon, site, clearAir);
     const cloudy = solarAt(noon, site, { ...clearAir, cloudCover: 0.7 });
     expect(clear.measured).toEqual({ beamNormal: false, diffuseHorizontal: false });
-    expect(clear.beamNormal).toBeCloseTo(clearSkyAshrae(4, clear.altitudeDeg).beamNormal, 9);
+    // the ASHRAE constants interpolated to the day (issue: no steps on the 1st of each month)
+    expect(clear.beamNormal).toBeCloseTo(clearSkyAshraeOnDay(solarDayOfYear(noon, site.longitudeDeg), clear.altitudeDeg).beamNormal, 9);
     expect(cloudy.globalHorizontal).toBeCloseTo(clear.globalHorizontal * cloudFactorKastenCzeplak(0.7), 9);
   });
 

@@ -7,7 +7,7 @@ import {
   WSGG_SMITH_1982,
   wsggWeightSum,
   type FlueGasRadiationInput,
-} from '../../../src/physics/flue/gasRadiation.ts';
+} from '../../../src/physics/correlations/gasRadiation.ts';
 
 const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
