@@ -109,7 +109,7 @@ console.log('');
 // ---- 4. charts ----
 try {
   const { renderAllCharts } = await import('../src/output/charts/index.ts');
-  const { summarise } = await import('../src/analysis/metrics.ts');
+  const { summarise } = await import('../src/analysis/metrics/index.ts');
   const demo = loadScenarioFile('scenarios/demo.yaml').inputs;
   const result = simulate(demo);
   const summary = summarise({ inputs: demo, result, version: 'bench' });

@@ -11,7 +11,7 @@ import type { ChartConfiguration, ChartDataset, PointStyle } from 'chart.js';
 import type { ModelInputs } from '../../model/inputs.ts';
 import type { TimeSeries } from '../../model/timeseries.ts';
 import type { Summary } from '../../analysis/summary.ts';
-import { evaluationInstants } from '../../analysis/metrics.ts';
+import { evaluationInstants } from '../../analysis/metrics/index.ts';
 import { kelvinToCelsius } from '../../physics/constants.ts';
 import type { BandSpec, CellHatch } from './render.ts';
 
