@@ -1,7 +1,7 @@
 /**
  * chart.js configurations built from a run (pure data, no drawing): what each picture shows, its
  * axes (every one titled with its quantity and unit), its colours and line styles. Drawing lives
- * in ./render.ts. Temperatures are converted from kelvin to °C here, at the report edge.
+ * in ./render.ts. Temperatures are converted from kelvin to °C for display through ../format.ts.
  *
  * Colour scheme: every series differs from its neighbours in lightness AND in dash pattern and
  * point style, so the charts still read when printed in greyscale. Fonts scale with the chart
@@ -12,7 +12,7 @@ import type { ModelInputs } from '../../model/inputs.ts';
 import type { TimeSeries } from '../../model/timeseries.ts';
 import type { Summary } from '../../analysis/summary.ts';
 import { evaluationInstants } from '../../analysis/metrics/index.ts';
-import { kelvinToCelsius } from '../../physics/constants.ts';
+import { celsius as toC, clockHours, fixed as fmt, isoClock, isoMinute, round } from '../format.ts';
 import type { BandSpec, CellHatch } from './render.ts';
 
 export interface ChartBuildOptions {
@@ -105,17 +105,6 @@ export const MARGIN_CLASS_COLORS = {
 } as const;
 
 // ---------------------------------------------------------------- small helpers
-
-const toC = kelvinToCelsius;
-const round = (v: number, digits = 2) => Math.round(v * 10 ** digits) / 10 ** digits;
-const fmt = (v: number, digits = 1) => round(v, digits).toFixed(digits);
-
-/** Clock hours (0–24) of an ISO local time string `YYYY-MM-DDTHH:MM[:SS]…`. */
-export function clockHours(isoLocal: string): number {
-  const m = /T(\d{2}):(\d{2})(?::(\d{2}(?:\.\d+)?))?/.exec(isoLocal);
-  if (!m) return 0;
-  return Number(m[1]) + Number(m[2]) / 60 + Number(m[3] ?? 0) / 3600;
-}
 
 /** Hours of the local day for each evaluated instant: clock time of the first, then elapsed time (so a day runs 0 → 24). */
 export function localHours(series: TimeSeries, ks: readonly number[]): number[] {
@@ -339,7 +328,7 @@ function timeAxisTitle(summary: Summary): string {
 function periodWords(summary: Summary, series: TimeSeries, ks: readonly number[]): string {
   const first = series.isoLocal[ks[0] ?? 0] ?? '';
   const last = series.isoLocal[ks[ks.length - 1] ?? 0] ?? '';
-  return `${summary.run.evaluated_over}, ${first.slice(0, 16).replace('T', ' ')} – ${last.slice(0, 16).replace('T', ' ')} (${summary.scenario.time_zone})`;
+  return `${summary.run.evaluated_over}, ${isoMinute(first)} – ${isoMinute(last)} (${summary.scenario.time_zone})`;
 }
 
 // ---------------------------------------------------------------- 1. temperatures through the day
@@ -420,7 +409,7 @@ export function wallProfile(series: TimeSeries, summary: Summary, inputs: ModelI
   ];
   const datasets = profiles.map((p, j) => {
     const data = Array.from({ length: N }, (_, i) => ({ x: round(series.nodeRadius[i]!, 5), y: round(toC(series.temperatureK[(p.k * S + p.seg) * N + i]!)) }));
-    const ds = lineDataset(`${p.what}: ${series.isoLocal[p.k]!.slice(11, 16)} at ${fmt(series.heightM[p.seg]!)} m`, data, looks[j % looks.length]!, f, j);
+    const ds = lineDataset(`${p.what}: ${isoClock(series.isoLocal[p.k]!)} at ${fmt(series.heightM[p.seg]!)} m`, data, looks[j % looks.length]!, f, j);
     return { ...ds, pointRadius: f.pointRadius };
   });
   const r0 = series.nodeRadius[0]!;
@@ -532,7 +521,7 @@ export function acidMarginMap(series: TimeSeries, summary: Summary, inputs: Mode
   }));
   const dewName = acid ? 'acid' : 'water';
   const lowest = acid ? summary.lowest_acid_dew_margin_k : summary.lowest_water_dew_margin_k;
-  const subtitle = `Dew point ${fmt(dewC)} °C; required margin ${fmt(required, 0)} K; lowest margin ${lowest === null ? '–' : fmt(lowest)} K; ${unsafeCells === 0 ? 'no cell below the dew point' : 'outlined cells are BELOW the dew point'}`;
+  const subtitle = `Dew point ${fmt(dewC)} °C; required margin ${fmt(required, 0)} K; lowest margin ${fmt(lowest)} K; ${unsafeCells === 0 ? 'no cell below the dew point' : 'outlined cells are BELOW the dew point'}`;
   const yb = { min: 0, max: H };
   const base = baseOptions(`Inner surface margin above the ${dewName} dew point`, subtitle, f, 'bottom');
   return {
@@ -580,7 +569,7 @@ export function gasAlongHeight(series: TimeSeries, summary: Summary, inputs: Mod
     const data: Point[] = [{ x: round(toC(series.segment.gasInK[k * S]!)), y: 0 }];
     for (let s = 0; s < S; s++) data.push({ x: round(toC(series.segment.gasOutK[k * S + s]!)), y: round((s + 1) * dz, 4) });
     const firing = series.instant.firing[k] ? 'firing' : 'burner off';
-    return { ...lineDataset(`${series.isoLocal[k]!.slice(11, 16)} (${firing}, ${fmt(series.instant.massFlow[k]!, 2)} kg/s)`, data, looks[j]!, f, j), pointRadius: f.pointRadius, showLine: true };
+    return { ...lineDataset(`${isoClock(series.isoLocal[k]!)} (${firing}, ${fmt(series.instant.massFlow[k]!, 2)} kg/s)`, data, looks[j]!, f, j), pointRadius: f.pointRadius, showLine: true };
   });
   const x = minMax(datasets.flatMap((d) => d.data.map((p) => p.x)));
   const xb = niceBounds(x.lo - 0.03 * (x.hi - x.lo), x.hi + 0.03 * (x.hi - x.lo));
@@ -677,7 +666,7 @@ export function warmupInnerSurface(series: TimeSeries, summary: Summary, inputs:
   for (const m of marks)
     if (m.minutes !== null && m.minutes >= x0 && m.minutes <= x1) datasets.push(verticalDataset(`Top stays above ${m.label} after ${fmt(m.minutes)} min`, m.minutes, y.min, y.max, m.look, f));
   const notReached = marks.filter((m) => m.minutes === null && (m.label.startsWith('water') || series.acidDewPointK !== null)).map((m) => m.label);
-  const subtitle = `Firing started ${summary.warmup.firing_start_local.slice(0, 16).replace('T', ' ')}${notReached.length ? `; the top does NOT stay above the ${notReached.join(' nor the ')} within the run` : ''}`;
+  const subtitle = `Firing started ${isoMinute(summary.warmup.firing_start_local)}${notReached.length ? `; the top does NOT stay above the ${notReached.join(' nor the ')} within the run` : ''}`;
   return {
     type: 'line',
     data: { datasets },

@@ -11,6 +11,7 @@ import { renderChartPng } from './render.ts';
 
 export { renderChartPng } from './render.ts';
 export * from './configs.ts';
+export { clockHours } from '../format.ts';
 
 export interface RenderAllChartsOptions {
   /** Chart width, px (default 1000). */
