@@ -88,6 +88,7 @@ export async function runArtefacts(run: Run, options: WriteOptions = {}): Promis
       width: options.chartWidth ?? 1000,
       height: options.chartHeight ?? 600,
       heightsToPlot: options.chartHeightsM,
+      locations: run.locations,
     });
     for (const c of charts) artefacts.push({ fileName: c.fileName, content: c.png });
     artefacts.push({ fileName: 'report.html', content: renderReportHtml(run.summary, run.inputs, charts) });
