@@ -26,7 +26,7 @@ export { MATERIALS, findMaterial, materialNames } from './physics/materials/inde
 export type { ModelInputs } from './model/inputs.ts';
 export type { RunResult, TimeSeries, EnergyAccount } from './model/timeseries.ts';
 export type { Summary, Verdict } from './analysis/summary.ts';
-export type { SummaryLocations, Location } from './analysis/metrics/index.ts';
+export type { SummaryLocations, Location as FigureLocation } from './analysis/metrics/index.ts';
 
 /** The tool's version, from package.json. */
 export const VERSION: string = (JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string }).version;
