@@ -109,13 +109,13 @@ console.log('');
 // ---- 4. charts ----
 try {
   const { renderAllCharts } = await import('../src/output/charts/index.ts');
-  const { summarise } = await import('../src/analysis/metrics.ts');
+  const { summariseRun } = await import('../src/analysis/metrics/index.ts');
   const demo = loadScenarioFile('scenarios/demo.yaml').inputs;
   const result = simulate(demo);
-  const summary = summarise({ inputs: demo, result, version: 'bench' });
-  renderAllCharts(result.series, summary, demo, { width: 1000, height: 600 });
+  const { summary, locations } = summariseRun({ inputs: demo, result, version: 'bench' });
+  renderAllCharts(result.series, summary, demo, { width: 1000, height: 600, locations });
   const t0 = performance.now();
-  const charts = renderAllCharts(result.series, summary, demo, { width: 1000, height: 600 });
+  const charts = renderAllCharts(result.series, summary, demo, { width: 1000, height: 600, locations });
   console.log(`4. charts: ${charts.length} PNG charts of the demo at 1000×600 in ${(performance.now() - t0).toFixed(0)} ms`);
 } catch (e) {
   console.log(`4. charts: not measured (${(e as Error).message})`);

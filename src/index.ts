@@ -9,7 +9,7 @@
 import { readFileSync } from 'node:fs';
 import { validateScenario, loadScenarioFile, type LoadedScenario } from './input/scenario/load.ts';
 import { simulate, type SimulateOptions } from './model/simulate.ts';
-import { summarise } from './analysis/metrics.ts';
+import { summariseRun, type SummaryLocations } from './analysis/metrics/index.ts';
 import { summaryJson, timeseriesCsv, segmentsCsv, writeArtefactsAtomically, type Artefact } from './output/write.ts';
 import type { ModelInputs } from './model/inputs.ts';
 import type { RunResult } from './model/timeseries.ts';
@@ -21,12 +21,14 @@ export { scenarioSchema, scenarioJsonSchema, type Scenario } from './input/scena
 export { simulate, SimulationError } from './model/simulate.ts';
 export { CORRELATIONS, describeCorrelation } from './physics/correlations/registry.ts';
 export { CORRELATIONS_IN_USE } from './model/correlations.ts';
-export { summarise, thermalStressIndicator } from './analysis/metrics.ts';
+export { summarise, summariseRun } from './analysis/metrics/index.ts';
+export { thermalStressIndicator } from './physics/wall/stress.ts';
 export { resultSheet } from './output/console.ts';
 export { MATERIALS, findMaterial, materialNames } from './physics/materials/index.ts';
 export type { ModelInputs } from './model/inputs.ts';
 export type { RunResult, TimeSeries, EnergyAccount } from './model/timeseries.ts';
 export type { Summary, Verdict } from './analysis/summary.ts';
+export type { SummaryLocations, Location as FigureLocation } from './analysis/metrics/index.ts';
 
 /** The tool's version, from package.json. */
 export const VERSION: string = (JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string }).version;
@@ -35,6 +37,8 @@ export interface Run {
   readonly inputs: ModelInputs;
   readonly result: RunResult;
   readonly summary: Summary;
+  /** Where each located figure of the summary occurs, as output-instant and segment indices. */
+  readonly locations: SummaryLocations;
   readonly description: string | null;
 }
 
@@ -58,8 +62,8 @@ export function runScenario(scenario: string | Record<string, unknown> | LoadedS
     description = loaded.scenario.description ?? null;
   }
   const result = simulate(inputs, options);
-  const summary = summarise({ inputs, result, version: VERSION, description });
-  return { inputs, result, summary, description };
+  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description });
+  return { inputs, result, summary, locations, description };
 }
 
 export interface WriteOptions {
@@ -86,6 +90,7 @@ export async function runArtefacts(run: Run, options: WriteOptions = {}): Promis
       width: options.chartWidth ?? 1000,
       height: options.chartHeight ?? 600,
       heightsToPlot: options.chartHeightsM,
+      locations: run.locations,
     });
     for (const c of charts) artefacts.push({ fileName: c.fileName, content: c.png });
     artefacts.push({ fileName: 'report.html', content: renderReportHtml(run.summary, run.inputs, charts) });

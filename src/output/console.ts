@@ -4,8 +4,9 @@
  */
 import type { Summary, Verdict } from '../analysis/summary.ts';
 import type { Comparison } from '../analysis/compare.ts';
+import { decimals, isoMinute, MISSING } from './format.ts';
 
-const STATUS_WORD: Record<Verdict['status'], string> = { pass: 'PASS', fail: 'FAIL', 'not-set': '—' };
+const STATUS_WORD: Record<Verdict['status'], string> = { pass: 'PASS', fail: 'FAIL', 'not-set': MISSING };
 
 /** Lay out rows in columns padded to the widest cell. */
 export function table(rows: readonly (readonly string[])[], align: readonly ('l' | 'r')[] = []): string[] {
@@ -14,8 +15,8 @@ export function table(rows: readonly (readonly string[])[], align: readonly ('l'
   return rows.map((r) => r.map((cell, i) => (align[i] === 'r' ? cell.padStart(widths[i]!) : cell.padEnd(widths[i]!))).join('  ').trimEnd());
 }
 
-const num = (v: number | null | undefined, digits = 1): string => (v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(digits));
-const hhmm = (iso: string | null): string => (iso ? iso.slice(0, 16).replace('T', ' ') : '—');
+const num = (v: number | null | undefined, digits = 1): string => decimals(v, digits);
+const hhmm = isoMinute;
 
 /** The whole sheet as lines. */
 export function resultSheet(s: Summary, outDir?: string): string[] {
@@ -72,7 +73,7 @@ export function resultSheet(s: Summary, outDir?: string): string[] {
   const acid = s.acid_dew_point_c === null ? 'none (no SO3)' : `${num(s.acid_dew_point_c)} °C, lowest margin ${num(s.lowest_acid_dew_margin_k)} K at ${num(s.lowest_acid_dew_margin_height_m)} m, ${hhmm(s.lowest_acid_dew_margin_time)}`;
   lines.push(`  acid dew point   ${acid}`);
   lines.push(`  water dew point  ${num(s.water_dew_point_c)} °C, lowest margin ${num(s.lowest_water_dew_margin_k)} K at ${num(s.lowest_water_dew_margin_height_m)} m, ${hhmm(s.lowest_water_dew_margin_time)}`);
-  const top = (arr: readonly { height_m: number; hours: number }[]) => (arr.length ? `${num(arr[arr.length - 1]!.hours)} h at the top, ${num(arr[0]!.hours)} h at the bottom` : '—');
+  const top = (arr: readonly { height_m: number; hours: number }[]) => (arr.length ? `${num(arr[arr.length - 1]!.hours)} h at the top, ${num(arr[0]!.hours)} h at the bottom` : MISSING);
   lines.push(`  hours below acid dew point   ${top(s.hours_below_acid_dew)}`);
   lines.push(`  hours below water dew point  ${top(s.hours_below_water_dew)}`);
   lines.push(`  gas exit ${num(s.gas_exit_min_c)} to ${num(s.gas_exit_max_c)} °C; draft ${num(s.draft_min_pa)} to ${num(s.draft_max_pa)} Pa`);
@@ -83,7 +84,7 @@ export function resultSheet(s: Summary, outDir?: string): string[] {
     lines.push(`  inner surface above water dew point + margin: ${num(w.minutes_to_water_dew, 0)} min`);
     lines.push(`  inner surface above acid dew point + margin:  ${num(w.minutes_to_acid_dew, 0)} min`);
     lines.push(`  shell at 90 % of its rise: ${num(w.minutes_to_shell_90_percent, 0)} min; shell past the touch limit: ${w.minutes_to_shell_touch === null ? 'never' : `${num(w.minutes_to_shell_touch, 0)} min`}`);
-    lines.push('  by height (minutes from firing; — = not within the run):');
+    lines.push(`  by height (minutes from firing; ${MISSING} = not within the run):`);
     lines.push(
       ...table(
         [

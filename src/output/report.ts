@@ -5,8 +5,8 @@
  * NOT SET), never shown by colour alone. Inputs are SI/kelvin; this edge converts for display.
  */
 import type { ModelInputs, FiringPointInput, LayerInput } from '../model/inputs.ts';
-import { kelvinToCelsius } from '../physics/constants.ts';
 import type { Summary, Verdict, WarmupAtHeight } from '../analysis/summary.ts';
+import { celsius as toC, clockFromSeconds as clock, fixed as num, isoMinute as when, MISSING } from './format.ts';
 
 export interface ReportChart {
   readonly fileName: string;
@@ -25,28 +25,9 @@ export function escapeHtml(value: unknown): string {
 }
 
 const esc = escapeHtml;
-const toC = kelvinToCelsius;
-
-/** A number with a fixed count of decimals, or an en dash for null/NaN. */
-function num(v: number | null | undefined, digits = 1): string {
-  if (v === null || v === undefined || !Number.isFinite(v)) return '–';
-  const r = Math.round(v * 10 ** digits) / 10 ** digits;
-  return (Object.is(r, -0) ? 0 : r).toFixed(digits);
-}
-
-/** "2026-07-15T16:10:00+02:00" → "2026-07-15 16:10". */
-function when(iso: string | null | undefined): string {
-  if (!iso) return '–';
-  return iso.slice(0, 16).replace('T', ' ');
-}
-
-function clock(seconds: number): string {
-  const m = Math.round(seconds / 60);
-  return `${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
-}
 
 const STATUS_WORD: Record<Verdict['status'], string> = { pass: 'PASS', fail: 'FAIL', 'not-set': 'NOT SET' };
-const STATUS_MARK: Record<Verdict['status'], string> = { pass: '✓', fail: '✗', 'not-set': '–' };
+const STATUS_MARK: Record<Verdict['status'], string> = { pass: '✓', fail: '✗', 'not-set': MISSING };
 
 function table(head: readonly string[], rows: readonly string[], cls = ''): string {
   return `<table${cls ? ` class="${cls}"` : ''}><thead><tr>${head.map((h) => `<th scope="col">${h}</th>`).join('')}</tr></thead><tbody>${rows.join('')}</tbody></table>`;
@@ -70,7 +51,7 @@ and the heat lost per day &mdash; each compared with the limits set in the scena
 function layerRow(l: LayerInput, j: number): string {
   const m = l.material;
   const k = m.kind === 'solid' && m.conductivity.values.length > 0 ? `${num(Math.min(...m.conductivity.values), 3)}–${num(Math.max(...m.conductivity.values), 3)}` : 'still air';
-  return `<tr>${td(String(j + 1))}${td(esc(l.label))}${td(`${esc(m.name)}<div class="note">${esc(m.description)}</div>`)}${td(esc(m.kind))}${td(num(l.thickness * 1000, 1), 'n')}${td(k, 'n')}${td(m.kind === 'solid' ? num(m.density, 0) : '–', 'n')}${td(m.kind === 'solid' ? num(toC(m.maxServiceTemperatureK), 0) : '–', 'n')}${td(l.contactResistanceToNext > 0 ? num(l.contactResistanceToNext, 4) : '0', 'n')}</tr>`;
+  return `<tr>${td(String(j + 1))}${td(esc(l.label))}${td(`${esc(m.name)}<div class="note">${esc(m.description)}</div>`)}${td(esc(m.kind))}${td(num(l.thickness * 1000, 1), 'n')}${td(k, 'n')}${td(m.kind === 'solid' ? num(m.density, 0) : MISSING, 'n')}${td(m.kind === 'solid' ? num(toC(m.maxServiceTemperatureK), 0) : MISSING, 'n')}${td(l.contactResistanceToNext > 0 ? num(l.contactResistanceToNext, 4) : '0', 'n')}</tr>`;
 }
 
 function weatherText(inputs: ModelInputs): string {
@@ -130,8 +111,8 @@ ${table([...(perDay ? ['Day'] : []), 'Local time', 'Inlet gas (°C)', 'Mass flow
 function verdictSection(summary: Summary): string {
   const rows = summary.verdicts.map((v) => {
     const limit = v.limit_value === null ? 'not set' : `${num(v.limit_value, 2)} ${esc(v.unit)}`;
-    const gov = v.governing_value === null ? '–' : `${num(v.governing_value, 2)} ${esc(v.unit)}`;
-    return `<tr class="verdict status-${v.status}" data-limit="${esc(v.limit)}" data-status="${esc(v.status)}">${td(`<span class="badge">${STATUS_MARK[v.status]} ${STATUS_WORD[v.status]}</span>`, 'status')}${td(`${esc(v.title)}<div class="note">${esc(v.detail)}</div>`)}${td(gov, 'n')}${td(limit, 'n')}${td(esc(when(v.time_local)))}${td(v.height_m === null ? '–' : num(v.height_m, 1), 'n')}</tr>`;
+    const gov = v.governing_value === null ? MISSING : `${num(v.governing_value, 2)} ${esc(v.unit)}`;
+    return `<tr class="verdict status-${v.status}" data-limit="${esc(v.limit)}" data-status="${esc(v.status)}">${td(`<span class="badge">${STATUS_MARK[v.status]} ${STATUS_WORD[v.status]}</span>`, 'status')}${td(`${esc(v.title)}<div class="note">${esc(v.detail)}</div>`)}${td(gov, 'n')}${td(limit, 'n')}${td(esc(when(v.time_local)))}${td(v.height_m === null ? MISSING : num(v.height_m, 1), 'n')}</tr>`;
   });
   const fails = summary.verdicts.filter((v) => v.status === 'fail').length;
   const overall = fails === 0 ? `<p class="overall ok"><strong>ALL SET LIMITS PASS.</strong></p>` : `<p class="overall bad"><strong>${fails === 1 ? 'ONE LIMIT FAILS' : `${fails} LIMITS FAIL`}.</strong></p>`;
@@ -154,7 +135,7 @@ function keyFiguresSection(summary: Summary): string {
     ...(summary.lowest_acid_dew_margin_k === null ? [] : [['Lowest margin above the acid dew point', `${num(summary.lowest_acid_dew_margin_k)} K`, when(summary.lowest_acid_dew_margin_time), num(summary.lowest_acid_dew_margin_height_m, 1)]]),
   ].map(([a, b, c, d]) => `<tr>${td(esc(a))}${td(esc(b), 'n')}${td(esc(c))}${td(esc(d), 'n')}</tr>`);
   const positions = summary.positions.map((p) => `<tr>${td(esc(p.position.replace(/_/g, ' ')))}${td(num(p.radius_m, 3), 'n')}${td(num(p.min_c), 'n')}${td(num(p.max_c), 'n')}${td(num(p.swing_k), 'n')}${td(num(p.swing_height_m, 1), 'n')}</tr>`);
-  const layers = summary.layers.map((l) => `<tr>${td(esc(l.label))}${td(esc(l.material))}${td(num(l.thickness_mm, 1), 'n')}${td(num(l.min_c), 'n')}${td(num(l.max_c), 'n')}${td(num(l.swing_k), 'n')}${td(num(l.max_delta_t_k, 2), 'n')}${td(l.stress_indicator_mpa === null ? '–' : num(l.stress_indicator_mpa, 3), 'n')}${td(l.max_service_c === null ? '–' : num(l.max_service_c, 0), 'n')}</tr>`);
+  const layers = summary.layers.map((l) => `<tr>${td(esc(l.label))}${td(esc(l.material))}${td(num(l.thickness_mm, 1), 'n')}${td(num(l.min_c), 'n')}${td(num(l.max_c), 'n')}${td(num(l.swing_k), 'n')}${td(num(l.max_delta_t_k, 2), 'n')}${td(l.stress_indicator_mpa === null ? MISSING : num(l.stress_indicator_mpa, 3), 'n')}${td(l.max_service_c === null ? MISSING : num(l.max_service_c, 0), 'n')}</tr>`);
   const acid = summary.acid_dew_point_c !== null;
   const hours = summary.hours_below_water_dew.map((h, j) => `<tr>${td(num(h.height_m, 1), 'n')}${td(num(h.hours, 2), 'n')}${acid ? td(num(summary.hours_below_acid_dew[j]?.hours ?? null, 2), 'n') : ''}</tr>`);
   return `<section id="figures"><h2>Key figures</h2>

@@ -8,7 +8,7 @@ import { mkdirSync, writeFileSync, renameSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { TimeSeries } from '../model/timeseries.ts';
 import type { Summary } from '../analysis/summary.ts';
-import { KELVIN_OFFSET } from '../physics/constants.ts';
+import { celsius, decimals } from './format.ts';
 
 /** A file to write: its name in the output folder and its content. */
 export interface Artefact {
@@ -16,7 +16,8 @@ export interface Artefact {
   readonly content: string | Buffer;
 }
 
-const fmt = (v: number, digits: number): string => (Number.isFinite(v) ? v.toFixed(digits) : '');
+/** A CSV cell: `digits` decimals, empty when the value is missing. */
+const fmt = (v: number, digits: number): string => decimals(v, digits, '');
 
 /** timeseries.csv: one row per output instant × segment × node. */
 export function timeseriesCsv(series: TimeSeries): string {
@@ -29,7 +30,7 @@ export function timeseriesCsv(series: TimeSeries): string {
       const h = `${head}${fmt(series.heightM[s]!, 3)},`;
       let chunk = '';
       for (let i = 0; i < N; i++) {
-        chunk += `${h}${series.nodeLabel[i]},${fmt(series.nodeRadius[i]!, 5)},${fmt(series.temperatureK[(k * S + s) * N + i]! - KELVIN_OFFSET, 3)}\n`;
+        chunk += `${h}${series.nodeLabel[i]},${fmt(series.nodeRadius[i]!, 5)},${fmt(celsius(series.temperatureK[(k * S + s) * N + i]!), 3)}\n`;
       }
       parts.push(chunk);
     }
@@ -48,7 +49,7 @@ export function segmentsCsv(series: TimeSeries): string {
   ];
   for (let k = 0; k < series.t.length; k++) {
     const head = `${series.isoLocal[k]},${fmt((series.t[k]! - t0) / 3600, 4)},`;
-    const tail = `${fmt(inst.inletTemperatureK[k]! - KELVIN_OFFSET, 2)},${fmt(inst.massFlow[k]!, 4)},${inst.firing[k] ? 1 : 0},${fmt(inst.draftPa[k]!, 2)}\n`;
+    const tail = `${fmt(celsius(inst.inletTemperatureK[k]!), 2)},${fmt(inst.massFlow[k]!, 4)},${inst.firing[k] ? 1 : 0},${fmt(inst.draftPa[k]!, 2)}\n`;
     let chunk = '';
     for (let s = 0; s < S; s++) {
       const j = k * S + s;
@@ -56,22 +57,22 @@ export function segmentsCsv(series: TimeSeries): string {
         head +
         [
           fmt(series.heightM[s]!, 3),
-          fmt(inst.airTemperatureK[k]! - KELVIN_OFFSET, 2),
+          fmt(celsius(inst.airTemperatureK[k]!), 2),
           fmt(g.windAtHeight[j]!, 3),
           fmt(inst.sunAltitudeDeg[k]!, 3),
           fmt(inst.sunAzimuthDeg[k]!, 3),
           fmt(g.sunPerMetre[j]!, 2),
           fmt(g.outsideFilm[j]!, 3),
-          fmt(inst.skyTemperatureK[k]! - KELVIN_OFFSET, 2),
+          fmt(celsius(inst.skyTemperatureK[k]!), 2),
           fmt(g.convectionPerMetre[j]!, 2),
           fmt(g.radiationPerMetre[j]!, 2),
-          fmt(g.gasInK[j]! - KELVIN_OFFSET, 2),
-          fmt(g.gasOutK[j]! - KELVIN_OFFSET, 2),
+          fmt(celsius(g.gasInK[j]!), 2),
+          fmt(celsius(g.gasOutK[j]!), 2),
           fmt(g.insideFilm[j]!, 3),
           fmt(g.gasToWallPerMetre[j]!, 2),
-          fmt(series.waterDewPointK - KELVIN_OFFSET, 2),
+          fmt(celsius(series.waterDewPointK), 2),
           fmt(g.waterDewMarginK[j]!, 3),
-          fmt(series.acidDewPointK === null ? Number.NaN : series.acidDewPointK - KELVIN_OFFSET, 2),
+          fmt(series.acidDewPointK === null ? Number.NaN : celsius(series.acidDewPointK), 2),
           fmt(g.acidDewMarginK[j]!, 3),
         ].join(',') +
         ',' +

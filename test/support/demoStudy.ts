@@ -1,7 +1,7 @@
 /** The demo scenario shortened to one day at a 20-minute output interval, as a cycle or a warm-up study (keeps tests fast). */
 import { loadScenarioFile } from '../../src/input/scenario/load.ts';
 import { simulate } from '../../src/model/simulate.ts';
-import { summarise } from '../../src/analysis/metrics.ts';
+import { summarise } from '../../src/analysis/metrics/index.ts';
 import type { ModelInputs } from '../../src/model/inputs.ts';
 import type { RunResult } from '../../src/model/timeseries.ts';
 import type { Summary } from '../../src/analysis/summary.ts';

@@ -6,11 +6,29 @@ import type { ChartConfiguration } from 'chart.js';
 import type { ModelInputs } from '../../model/inputs.ts';
 import type { TimeSeries } from '../../model/timeseries.ts';
 import type { Summary } from '../../analysis/summary.ts';
-import { acidMarginMap, DEFAULT_CHART_HEIGHT, DEFAULT_CHART_WIDTH, gasAlongHeight, outsideHeatFlows, segmentNearest, temperaturesThroughDay, wallProfile, warmupInnerSurface } from './configs.ts';
+import type { SummaryLocations } from '../../analysis/metrics/index.ts';
+import { DEFAULT_CHART_HEIGHT, DEFAULT_CHART_WIDTH } from './look.ts';
+import { segmentNearest } from './parts.ts';
+import { temperaturesThroughDay } from './temperaturesThroughDay.ts';
+import { wallProfile } from './wallProfile.ts';
+import { acidMarginMap } from './acidMarginMap.ts';
+import { gasAlongHeight } from './gasAlongHeight.ts';
+import { outsideHeatFlows } from './outsideHeatFlows.ts';
+import { warmupInnerSurface } from './warmupInnerSurface.ts';
 import { renderChartPng } from './render.ts';
+import { decimals } from '../format.ts';
 
 export { renderChartPng } from './render.ts';
-export * from './configs.ts';
+export { DEFAULT_CHART_HEIGHT, DEFAULT_CHART_WIDTH, INK, FONT_FAMILY, MARGIN_CLASS_COLORS, chartTypography } from './look.ts';
+export { localHours, niceBounds, niceStep } from './scales.ts';
+export { positionName, segmentNearest, type ChartBuildOptions, type SegmentChartOptions } from './parts.ts';
+export { clockHours } from '../format.ts';
+export { temperaturesThroughDay } from './temperaturesThroughDay.ts';
+export { wallProfile } from './wallProfile.ts';
+export { acidMarginMap, marginClasses, marginClassOf, type MarginClass } from './acidMarginMap.ts';
+export { gasAlongHeight, type GasAlongHeightOptions } from './gasAlongHeight.ts';
+export { outsideHeatFlows } from './outsideHeatFlows.ts';
+export { warmupInnerSurface } from './warmupInnerSurface.ts';
 
 export interface RenderAllChartsOptions {
   /** Chart width, px (default 1000). */
@@ -19,6 +37,8 @@ export interface RenderAllChartsOptions {
   readonly height?: number;
   /** Heights (m) at which temperatures are charted, each to the nearest segment; default the top and the bottom segment. */
   readonly heightsToPlot?: readonly number[];
+  /** Where the summary's figures occur (from summariseRun); found again from the series when absent. */
+  readonly locations?: SummaryLocations;
 }
 
 export interface RenderedChart {
@@ -42,7 +62,7 @@ export function chartTitle(config: ChartConfiguration): string {
 function segmentName(series: TimeSeries, seg: number): string {
   if (seg === series.segments - 1) return 'top';
   if (seg === 0) return 'bottom';
-  return `at-${series.heightM[seg]!.toFixed(1).replace('.', '_')}m`;
+  return `at-${decimals(series.heightM[seg]!, 1).replace('.', '_')}m`;
 }
 
 /** Configure and render every chart that applies to the run (the warm-up chart only for warm-up studies). */
@@ -50,14 +70,15 @@ export function renderAllCharts(series: TimeSeries, summary: Summary, inputs: Mo
   const width = options.width ?? DEFAULT_CHART_WIDTH;
   const height = options.height ?? DEFAULT_CHART_HEIGHT;
   const size = { width, height };
+  const common = { ...size, locations: options.locations };
   const segments = options.heightsToPlot && options.heightsToPlot.length > 0 ? [...new Set(options.heightsToPlot.map((h) => segmentNearest(series, h)))].sort((a, b) => b - a) : [...new Set([series.segments - 1, 0])];
   const configs: { name: string; config: ChartConfiguration }[] = [];
-  for (const seg of segments) configs.push({ name: `temperatures-${segmentName(series, seg)}`, config: temperaturesThroughDay(series, summary, inputs, { ...size, segment: seg }) });
-  configs.push({ name: 'wall-profile', config: wallProfile(series, summary, inputs, size) });
-  configs.push({ name: 'acid-margin-map', config: acidMarginMap(series, summary, inputs, size) });
-  configs.push({ name: 'gas-along-height', config: gasAlongHeight(series, summary, inputs, size) });
-  configs.push({ name: 'outside-heat-flows', config: outsideHeatFlows(series, summary, inputs, { ...size, segment: series.segments - 1 }) });
-  const warm = warmupInnerSurface(series, summary, inputs, size);
+  for (const seg of segments) configs.push({ name: `temperatures-${segmentName(series, seg)}`, config: temperaturesThroughDay(series, summary, inputs, { ...common, segment: seg }) });
+  configs.push({ name: 'wall-profile', config: wallProfile(series, summary, inputs, common) });
+  configs.push({ name: 'acid-margin-map', config: acidMarginMap(series, summary, inputs, common) });
+  configs.push({ name: 'gas-along-height', config: gasAlongHeight(series, summary, inputs, common) });
+  configs.push({ name: 'outside-heat-flows', config: outsideHeatFlows(series, summary, inputs, { ...common, segment: series.segments - 1 }) });
+  const warm = warmupInnerSurface(series, summary, inputs, common);
   if (warm !== null) configs.push({ name: 'warmup-inner-surface', config: warm });
   return configs.map(({ name, config }) => ({ name, fileName: `${name}.png`, title: chartTitle(config), config, png: renderChartPng(config, size) }));
 }

@@ -1,6 +1,6 @@
 /**
- * Drawing: a chart.js configuration (pure data, built in ./configs.ts) onto an @napi-rs/canvas
- * canvas, out as PNG bytes. No physics here.
+ * Drawing: a chart.js configuration (pure data, built by one module per chart) onto an
+ * @napi-rs/canvas canvas, out as PNG bytes. No physics here.
  *
  * chart.js runs in Node without a DOM: with no `window` it picks its BasicPlatform, which draws on
  * whatever 2D context it is given, so no global shims are needed. Every chart is rendered with

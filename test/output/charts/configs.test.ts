@@ -4,7 +4,7 @@ import { KELVIN_OFFSET } from '../../../src/physics/constants.ts';
 import {
   acidMarginMap, chartTypography, clockHours, gasAlongHeight, marginClassOf, marginClasses, niceBounds, outsideHeatFlows,
   temperaturesThroughDay, wallProfile, warmupInnerSurface,
-} from '../../../src/output/charts/configs.ts';
+} from '../../../src/output/charts/index.ts';
 
 import { demoStudy, type Study } from '../../support/demoStudy.ts';
 

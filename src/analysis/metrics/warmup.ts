@@ -1,0 +1,65 @@
+/**
+ * Warm-up studies: how long after firing starts the inner surface stays above each dew point
+ * (plus its required margin), and how long the shell takes to reach 90 % of its rise and the touch
+ * limit, at every height.
+ */
+import type { LimitsInput } from '../../model/inputs.ts';
+import type { Summary, WarmupAtHeight } from '../summary.ts';
+import { round } from '../rounding.ts';
+import type { Evaluated } from './evaluated.ts';
+
+/** First time (s after tStart) from which `values` stays at or above `threshold`, by linear interpolation; null if never. */
+export function timeToStayAbove(times: readonly number[], values: readonly number[], threshold: number): number | null {
+  const n = values.length;
+  if (n === 0 || values[n - 1]! < threshold) return null;
+  let k = n - 1;
+  while (k > 0 && values[k - 1]! >= threshold) k--;
+  if (k === 0) return times[0]!;
+  const t0 = times[k - 1]!;
+  const t1 = times[k]!;
+  const v0 = values[k - 1]!;
+  const v1 = values[k]!;
+  return t0 + ((threshold - v0) / (v1 - v0)) * (t1 - t0);
+}
+
+/** First time at which `values` reaches `threshold` (crossing upward), linear interpolation; null if never. */
+export function timeToReach(times: readonly number[], values: readonly number[], threshold: number): number | null {
+  if (values.length === 0) return null;
+  if (values[0]! >= threshold) return times[0]!;
+  for (let k = 1; k < values.length; k++) {
+    if (values[k]! >= threshold) {
+      const v0 = values[k - 1]!;
+      const v1 = values[k]!;
+      return times[k - 1]! + ((threshold - v0) / (v1 - v0)) * (times[k]! - times[k - 1]!);
+    }
+  }
+  return null;
+}
+
+/** Shell rise, K, below which the time to 90 % of it is not reported (the shell barely warms). */
+const MIN_SHELL_RISE_K = 0.1;
+
+/**
+ * Warm-up times at every height, bottom → top, in minutes from `firingStartT` (s, on the series'
+ * time axis); the firing start is stated as the first output instant.
+ */
+export function warmupTimes(ev: Evaluated, firingStartT: number, limits: LimitsInput): NonNullable<Summary['warmup']> {
+  const { series: s, ks, S, N, T } = ev;
+  const times = Array.from(s.t, (t) => t - firingStartT);
+  const atHeight = (seg: number): WarmupAtHeight => {
+    const inner = ks.map((k) => T(k, seg, 0));
+    const shell = ks.map((k) => T(k, seg, N - 1));
+    const tt = ks.map((k) => times[k]!);
+    const min = (x: number | null) => (x === null ? null : round(x / 60, 1));
+    const shellRise = shell[shell.length - 1]! - shell[0]!;
+    return {
+      height_m: round(s.heightM[seg]!, 2),
+      minutes_to_water_dew: min(timeToStayAbove(tt, inner, s.waterDewPointK + (limits.waterDewMarginK ?? 0))),
+      minutes_to_acid_dew: s.acidDewPointK === null ? null : min(timeToStayAbove(tt, inner, s.acidDewPointK + (limits.acidDewMarginK ?? 0))),
+      minutes_to_shell_90_percent: shellRise > MIN_SHELL_RISE_K ? min(timeToReach(tt, shell, shell[0]! + 0.9 * shellRise)) : null,
+      minutes_to_shell_touch: limits.shellTouchK === undefined ? null : min(timeToReach(tt, shell, limits.shellTouchK)),
+    };
+  };
+  const byHeight = Array.from({ length: S }, (_, seg) => atHeight(seg));
+  return { firing_start_local: s.isoLocal[0]!, top: byHeight[S - 1]!, by_height: byHeight };
+}

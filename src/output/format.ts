@@ -1,0 +1,58 @@
+/**
+ * How numbers and times read in every output file and sheet: kelvin to °C for display, rounding
+ * and decimals, ISO local times as "YYYY-MM-DD HH:MM", clock times, and the one mark for a value
+ * that is missing (not set, not applicable, not reached). Inside the program temperatures are
+ * kelvin; the conversion to °C for a reader happens here, at the edge.
+ */
+import { kelvinToCelsius } from '../physics/constants.ts';
+import { round } from '../analysis/rounding.ts';
+
+/** Rounding to a number of decimals: the same rule summary.json uses (src/analysis/rounding.ts). */
+export { round };
+
+/** The mark shown for a missing value, in the console sheet, the report and the charts alike. */
+export const MISSING = '—';
+
+/** °C for display, from K: T[°C] = T[K] − 273.15. */
+export const celsius = (kelvin: number): number => kelvinToCelsius(kelvin);
+
+/**
+ * `v` with exactly `digits` decimals after rounding by `round` (halves up on the scaled value;
+ * −0.04 → "0.0", never "-0.0"); MISSING for null, undefined, NaN and ±∞. For the report and charts.
+ */
+export function fixed(v: number | null | undefined, digits = 1): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return MISSING;
+  return round(v, digits).toFixed(digits);
+}
+
+/**
+ * `v` with exactly `digits` decimals by JavaScript's own `toFixed` (the nearest decimal to the
+ * stored binary value, so 12.35 → "12.3", and −0.04 → "-0.0"); `missing` for null, undefined, NaN
+ * and ±∞. For the console sheet and the CSV files, which have always been written this way.
+ */
+export function decimals(v: number | null | undefined, digits: number, missing = MISSING): string {
+  return v === null || v === undefined || !Number.isFinite(v) ? missing : v.toFixed(digits);
+}
+
+/** "2026-07-15T16:10:00+02:00" → "2026-07-15 16:10"; MISSING for null, undefined or an empty string. */
+export function isoMinute(iso: string | null | undefined): string {
+  return iso ? iso.slice(0, 16).replace('T', ' ') : MISSING;
+}
+
+/** "2026-07-15T16:10:00+02:00" → "16:10". */
+export function isoClock(iso: string): string {
+  return iso.slice(11, 16);
+}
+
+/** Seconds after local midnight → "HH:MM", to the nearest minute (e.g. 19 800 s → "05:30"). */
+export function clockFromSeconds(seconds: number): string {
+  const m = Math.round(seconds / 60);
+  return `${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
+}
+
+/** Clock hours (0–24) of an ISO local time string `YYYY-MM-DDTHH:MM[:SS]…`; 0 when it has no time. */
+export function clockHours(isoLocal: string): number {
+  const m = /T(\d{2}):(\d{2})(?::(\d{2}(?:\.\d+)?))?/.exec(isoLocal);
+  if (!m) return 0;
+  return Number(m[1]) + Number(m[2]) / 60 + Number(m[3] ?? 0) / 3600;
+}
