@@ -136,6 +136,9 @@ export interface Summary {
     readonly top: WarmupAtHeight;
     readonly by_height: readonly WarmupAtHeight[];
   } | null;
+  /** What the run assumed (wind conversion, pressures, gas radiation, clear sky) and every accepted extrapolation of a correlation, once each. */
+  readonly assumptions: readonly string[];
+  /** Problems the reader must see: correlations beyond their range without justification (how far, where), an unreached periodic state, a poor energy balance. */
   readonly warnings: readonly string[];
   readonly cautions: readonly string[];
 }

@@ -101,6 +101,11 @@ export function resultSheet(s: Summary, outDir?: string): string[] {
   lines.push(`  energy residual ${num(s.energy_residual_percent, 4)} %`);
   if (s.run.periodic_requested)
     lines.push(`  periodic state ${s.run.periodic_reached ? 'reached' : 'NOT reached'} after ${s.run.days_simulated} days (last change ${num(s.run.periodic_last_change_k, 3)} K, tolerance ${num(s.run.periodic_tolerance_k, 3)} K)`);
+  if (s.assumptions.length) {
+    lines.push('');
+    lines.push('ASSUMPTIONS OF THIS RUN');
+    for (const a of s.assumptions) lines.push(`  · ${a}`);
+  }
   if (s.warnings.length) {
     lines.push('');
     lines.push('WARNINGS');

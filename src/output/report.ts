@@ -6,6 +6,7 @@
  */
 import type { ModelInputs, FiringPointInput, LayerInput } from '../model/inputs.ts';
 import type { Summary, Verdict, WarmupAtHeight } from '../analysis/summary.ts';
+import { correlationsInUse } from './modelDescription.ts';
 import { celsius as toC, clockFromSeconds as clock, fixed as num, isoMinute as when, MISSING } from './format.ts';
 
 export interface ReportChart {
@@ -96,7 +97,7 @@ ${summary.scenario.description ? `<p class="description">${esc(summary.scenario.
 <dt>Stack</dt><dd>Height ${num(st.height, 1)} m, inner diameter ${num(st.innerDiameter, 3)} m, outer diameter ${num(outerDiameter, 3)} m, ${st.segments} axial segments.</dd>
 <dt>Outer surface</dt><dd>Emissivity ${num(inputs.surface.emissivity, 2)}, solar absorptance ${num(inputs.surface.solarAbsorptance, 2)}; outside film ${inputs.outside.filmCoefficient === undefined ? 'from correlations (Churchill–Bernstein forced, Churchill–Chu natural, combined)' : `fixed at ${num(inputs.outside.filmCoefficient)} W/(m² K)`}; radiation ${radText}; sun ${inputs.outside.sun ? 'applied' : 'not applied'}.</dd>
 <dt>Weather</dt><dd>${weatherText(inputs)}</dd>
-<dt>Flue gas</dt><dd>${compText} (mole fractions of the wet gas); properties of the ${inputs.flue.properties === 'mixture' ? 'gas mixture' : 'air'}; inside film ${inputs.flue.filmCoefficient === undefined ? 'from correlations (Gnielinski / laminar blend)' : `fixed at ${num(inputs.flue.filmCoefficient)} W/(m² K)`}; gas ${inputs.flue.gasCooling ? 'cools as it rises' : 'at inlet temperature at every height'}; pressure ${num(inputs.flue.pressurePa / 1000, 2)} kPa${inputs.flue.offMassFlow !== undefined ? `; natural-draft flow while off at least ${num(inputs.flue.offMassFlow, 3)} kg/s` : ''}.</dd>
+<dt>Flue gas</dt><dd>${compText} (mole fractions of the wet gas); properties of the ${inputs.flue.properties === 'mixture' ? 'gas mixture' : 'air'}; inside film ${inputs.flue.filmCoefficient === undefined ? 'from the correlations in use (below)' : `fixed at ${num(inputs.flue.filmCoefficient)} W/(m² K)`}; gas ${inputs.flue.gasCooling ? 'cools as it rises' : 'at inlet temperature at every height'}; pressure ${num(inputs.flue.pressurePa / 1000, 2)} kPa${inputs.flue.offMassFlow !== undefined ? `; natural-draft flow while off at least ${num(inputs.flue.offMassFlow, 3)} kg/s` : ''}.</dd>
 <dt>Run</dt><dd>${run.mode === 'warmup' ? `Warm-up from a ${esc(run.initial)} wall, firing from ${clock(run.firingStartClockS ?? 0)}` : `Daily cycle from the ${esc(run.initial)} state`}; ${length}; output every ${num(run.outputInterval / 60, 1)} min; ${esc(run.integrator)} integrator (rtol ${run.rtol}, atol ${run.atol} K).</dd>
 <dt>Limits</dt><dd>${limitText}.</dd>
 </dl>
@@ -188,17 +189,20 @@ ${figs.join('\n')}
 </section>`;
 }
 
-function assumptionsSection(): string {
+function assumptionsSection(summary: Summary): string {
   const items = [
     'Heat flows radially through the wall only: axial conduction along the height is neglected (small next to radial conduction for a slender wall); each axial segment is independent apart from the gas passing through it.',
-    'The flue gas is quasi-steady: it crosses the stack in seconds while the wall changes over minutes, so each segment sees the gas leaving the segment below, cooled exponentially towards the wall; gas radiation is not included.',
+    'The flue gas is quasi-steady: it crosses the stack in seconds while the wall changes over minutes, so each segment sees the gas leaving the segment below, cooled exponentially towards the wall.',
     'Sun is averaged around the circumference: the beam strikes the projected width, diffuse sky and ground-reflected light reach the wall with view factor ½. The sun-facing side runs hotter than these figures.',
-    'Outside: wind from a power-law profile; Churchill–Bernstein forced and Churchill–Chu natural convection, combined; radiation to half sky, half ground (or as set). Inside: Gnielinski with a laminar blend.',
+    'Radiation outside: to half sky and half ground (or as set); the sky a vertical wall sees is split between the sky and the near-horizon air, after cloud cover is applied.',
     'Material properties (conductivity and specific heat against temperature, density, emissivity, service limits, elastic data) are as stated in the material library or the scenario; their sources are listed there.',
     'Dew points: water from the water-vapour partial pressure; sulfuric acid from Verhoff &amp; Banchero (1974). The acid dew point depends strongly on the SO₃ fraction, which is rarely known well.',
     'The thermal-stress figure E·α·ΔT / (2(1 − ν)) is an indicator for a thin cylinder with a linear gradient, not a stress analysis.',
   ];
-  return `<section id="assumptions"><h2>Assumptions and limits of the model</h2><ul>${items.map((i) => `<li>${i}</li>`).join('')}</ul></section>`;
+  const correlations = correlationsInUse().map((c) => `<li><strong>${esc(c.role)}</strong>: ${esc(c.text)}</li>`);
+  return `<section id="assumptions"><h2>Assumptions and limits of the model</h2><ul>${items.map((i) => `<li>${i}</li>`).join('')}</ul>
+<h3>Correlations in use</h3><ul>${correlations.join('')}</ul>
+<h3>This run</h3><ul>${summary.assumptions.map((a) => `<li>${esc(a)}</li>`).join('')}</ul></section>`;
 }
 
 function listSection(id: string, title: string, items: readonly string[], emptyText: string | null): string {
@@ -285,7 +289,7 @@ ${verdictSection(summary)}
 ${keyFiguresSection(summary)}
 ${warmupSection(summary)}
 ${chartsSection(charts)}
-${assumptionsSection()}
+${assumptionsSection(summary)}
 ${listSection('warnings', 'Warnings from this run', summary.warnings, 'None.')}
 ${listSection('cautions', 'Cautions', summary.cautions, null)}
 </main>

@@ -7,6 +7,7 @@
  */
 import type { ModelInputs } from '../../model/inputs.ts';
 import type { RunResult, TimeSeries } from '../../model/timeseries.ts';
+import { runAssumptions } from '../assumptions.ts';
 import { CAUTIONS, type Summary } from '../summary.ts';
 import { round } from '../rounding.ts';
 import { evaluated, type Evaluated, type Location } from './evaluated.ts';
@@ -140,6 +141,7 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
     ...gasAndDraftRanges(ev),
     ...heatPerDay(energy),
     warmup,
+    assumptions: runAssumptions(inputs, result),
     warnings,
     cautions: CAUTIONS,
   };
