@@ -14,6 +14,7 @@ import { loadScenarioFile } from '../src/input/scenario/load.ts';
 import { simulate } from '../src/model/simulate.ts';
 import type { ModelInputs } from '../src/model/inputs.ts';
 import type { RunResult } from '../src/model/timeseries.ts';
+import { benchStartup } from './startup.ts';
 
 /** Runs before timing: V8 needs about this many one-day runs before its optimised code settles. */
 const WARM_UP_RUNS = 10;
@@ -120,3 +121,4 @@ try {
 } catch (e) {
   console.log(`4. charts: not measured (${(e as Error).message})`);
 }
+benchStartup();

@@ -8,17 +8,12 @@
  */
 import { Command, CommanderError, Option } from 'commander';
 import { resolve, join, dirname } from 'node:path';
-import { SingleBar, Presets } from 'cli-progress';
-import { loadScenarioFile, readScenarioFile, validateModelInputs, type ScenarioOverride } from '../input/scenario/load.ts';
 import { ScenarioError } from '../input/scenario/errors.ts';
-import { scenarioJsonSchema } from '../input/scenario/schema.ts';
-import { SimulationError } from '../model/simulate.ts';
-import { describeMaterialsTable } from '../physics/materials/index.ts';
-import { table } from '../output/console.ts';
-import { resultSheet, comparisonSheet } from '../output/console.ts';
-import { compareBuildUps, comparisonCsv } from '../analysis/compare.ts';
-import { writeArtefactsAtomically } from '../output/write.ts';
-import { runScenario, writeRun, VERSION } from '../index.ts';
+import { VERSION } from './version.ts';
+import type { ScenarioOverride } from '../input/scenario/load.ts';
+
+// Everything else is imported inside the command that needs it (`await import(...)`), so `--version`
+// and `--help` load neither the scenario schema (zod), the model nor the charts (chart.js, canvas).
 
 export const EXIT_OK = 0;
 export const EXIT_BAD_INPUT = 2;
@@ -71,6 +66,12 @@ function overridesFrom(raw: unknown, opts: RunOptions, mode: 'cycle' | 'warmup' 
 }
 
 async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmup' | null): Promise<number> {
+  const [{ readScenarioFile, validateModelInputs }, { runScenario, writeRun }, { resultSheet }, { SingleBar, Presets }] = await Promise.all([
+    import('../input/scenario/load.ts'),
+    import('../index.ts'),
+    import('../output/console.ts'),
+    import('cli-progress'),
+  ]);
   const chartSize = parseChartSize(opts.chartSize);
   const chartHeights = opts.chartHeights === undefined ? undefined : parseHeights(opts.chartHeights);
   const raw = readScenarioFile(file);
@@ -149,6 +150,13 @@ export function buildProgram(): Command {
     .option('--strict', 'exit with code 3 when no build-up meets every limit')
     .option('--json', 'print the comparison as JSON')
     .action(async (files: string[], opts: { out?: string; strict?: boolean; json?: boolean }) => {
+      const [{ loadScenarioFile }, { runScenario }, { compareBuildUps, comparisonCsv }, { writeArtefactsAtomically }, { comparisonSheet }] = await Promise.all([
+        import('../input/scenario/load.ts'),
+        import('../index.ts'),
+        import('../analysis/compare.ts'),
+        import('../output/write.ts'),
+        import('../output/console.ts'),
+      ]);
       // validate every file before running any: bad input anywhere means nothing runs and nothing is written
       const loaded = files.map((f) => loadScenarioFile(f));
       const runs = loaded.map((l) => runScenario(l));
@@ -167,14 +175,16 @@ export function buildProgram(): Command {
     .command('check')
     .argument('<scenario>', 'scenario file (YAML or JSON)')
     .description('validate a scenario file and report every problem, without running it')
-    .action((file: string) => {
+    .action(async (file: string) => {
+      const { loadScenarioFile } = await import('../input/scenario/load.ts');
       const loaded = loadScenarioFile(file);
       process.stdout.write(`${file}: valid scenario "${loaded.inputs.name}" (${loaded.inputs.layers.length} layers, ${loaded.inputs.stack.segments} segments)\n`);
     });
   program
     .command('schema')
     .description('print the JSON Schema of scenario files (for editor completion and checking)')
-    .action(() => {
+    .action(async () => {
+      const { scenarioJsonSchema } = await import('../input/scenario/schema.ts');
       process.stdout.write(`${JSON.stringify(scenarioJsonSchema(), null, 2)}\n`);
     });
   program
@@ -187,6 +197,7 @@ export function buildProgram(): Command {
         process.stdout.write(`${JSON.stringify(MATERIALS, null, 2)}\n`);
         return;
       }
+      const [{ describeMaterialsTable }, { table }] = await Promise.all([import('../physics/materials/index.ts'), import('../output/console.ts')]);
       const rows = describeMaterialsTable();
       process.stdout.write(`${table(rows).join('\n')}\n`);
     });
@@ -212,6 +223,7 @@ export async function main(argv: readonly string[]): Promise<number> {
       process.stderr.write(`stackday: ${e.message}\n`);
       return EXIT_BAD_INPUT;
     }
+    const { SimulationError } = await import('../model/simulate.ts');
     if (e instanceof SimulationError) {
       process.stderr.write(`stackday: the run could not be computed: ${e.message}\nNothing was written. Check the scenario for extreme values, or tighten run.relative_tolerance.\n`);
       return EXIT_BAD_INPUT;

@@ -1,5 +1,5 @@
 import { describe, it, expect, beforeAll, afterAll } from 'vitest';
-import { existsSync, mkdtempSync, writeFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, writeFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -9,10 +9,8 @@ import type { Summary } from '../../src/analysis/summary.ts';
 import { renderAllCharts, type RenderedChart } from '../../src/output/charts/index.ts';
 import { escapeHtml, renderReportHtml } from '../../src/output/report.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
-const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
-
 import { demoStudy as simulateDemo } from '../support/demoStudy.ts';
+import { CHROMIUM_ARGS, findChromium } from '../support/chromium.ts';
 
 interface Study {
   inputs: ModelInputs;
@@ -35,9 +33,14 @@ describe('report.html in a headless browser', () => {
   let page: Page;
   let dir: string;
   beforeAll(async () => {
-    // No skip: CI installs Debian's chromium; a missing browser must fail loudly.
-    if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium (apt-get install -y chromium) to run the report tests`);
-    browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS });
+    // No skip: a browser is always there (Debian's, a chosen one, or the one the dev dependency
+    // @sparticuz/chromium ships); one that cannot be found or started must fail loudly.
+    const found = await findChromium();
+    try {
+      browser = await chromium.launch({ executablePath: found.executablePath, args: CHROMIUM_ARGS });
+    } catch (e) {
+      throw new Error(`could not start Chromium (${found.source}, ${found.executablePath}): ${(e as Error).message}`);
+    }
     page = await browser.newPage(); // one page for the file: opening a page costs about a second
     dir = mkdtempSync(join(tmpdir(), 'stackday-report-'));
   });
