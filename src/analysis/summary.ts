@@ -89,7 +89,13 @@ export interface Summary {
     readonly periodic_tolerance_k: number | null;
     readonly periodic_change_by_day_k: readonly number[];
     readonly integrator: string;
+    /** Solver counts over the whole run: accepted and rejected steps, right-hand-side and Jacobian evaluations, Newton iterations and failures. */
     readonly steps: number;
+    readonly rejected_steps: number;
+    readonly rhs_evaluations: number;
+    readonly jacobian_evaluations: number;
+    readonly newton_iterations: number;
+    readonly newton_failures: number;
     readonly compute_ms: number;
     readonly output_interval_min: number;
     readonly segments: number;
