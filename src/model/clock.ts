@@ -42,17 +42,29 @@ export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
   if (!Number.isFinite(startUtcMs) || y < 100 || start.getFullYear() !== y || start.getMonth() !== mo || start.getDate() !== d)
     throw new RangeError(`start date "${startDate}" is not a calendar date`);
 
-  // UTC offsets change only at whole quarter hours of UTC in every zone of the tz database, so
-  // the offset is cached per 15-minute block of UTC (the time-zone lookup is costly).
-  const offsetCache = new Map<number, number>();
+  // UTC offsets change only at whole quarter hours of UTC in every zone of the tz database, and at
+  // most a few times a year. The time-zone lookup is costly, so: per UTC day, the offsets at its
+  // start and at its end; when they agree (every day but the few with a change) that is the
+  // offset for the whole day; otherwise the offset of each 15-minute block.
+  const lookup = (utcMs: number) => -new TZDate(utcMs, timeZone).getTimezoneOffset() * 60_000;
+  const dayCache = new Map<number, number>(); // day → offset, or NaN when it changes within the day
+  const blockCache = new Map<number, number>();
   const offsetMs = (utcMs: number): number => {
-    const block = Math.floor(utcMs / 900_000);
-    let off = offsetCache.get(block);
+    const day = Math.floor(utcMs / 86_400_000);
+    let off = dayCache.get(day);
     if (off === undefined) {
-      off = -new TZDate(block * 900_000, timeZone).getTimezoneOffset() * 60_000;
-      offsetCache.set(block, off);
+      const first = lookup(day * 86_400_000);
+      off = first === lookup((day + 1) * 86_400_000 - 900_000) ? first : Number.NaN;
+      dayCache.set(day, off);
     }
-    return off;
+    if (!Number.isNaN(off)) return off;
+    const block = Math.floor(utcMs / 900_000);
+    let blockOff = blockCache.get(block);
+    if (blockOff === undefined) {
+      blockOff = lookup(block * 900_000);
+      blockCache.set(block, blockOff);
+    }
+    return blockOff;
   };
   return {
     timeZone,

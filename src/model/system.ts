@@ -21,6 +21,8 @@ import { flueSideOfSegment, emptyFlueSide, type FlueSideSpec } from '../physics/
 import { outerBoundaryOfSegment, emptyOuterBoundary, type OuterSurfaceSpec, type OuterBoundaryOfSegment } from '../physics/outside/boundary.ts';
 import { gapConvectionRatio, insideMixed, insideNaturalNusselt, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
 import { sitePressurePa } from './site.ts';
+import { makeGreyGasExchange, meanBeamLengthLongCylinder } from '../physics/correlations/gasRadiation.ts';
+import { STANDARD_PRESSURE } from '../physics/constants.ts';
 
 export const AUX_GAS_TO_WALL = 0;
 export const AUX_CONVECTION = 1;
@@ -134,12 +136,10 @@ export class StackWallSystem implements OdeSystem {
       naturalNusselt: insideNaturalNusselt,
       mixed: insideMixed,
       radiation: flue.gasRadiation
-        ? {
-            waterPartialPressurePa: flue.composition.H2O * flue.pressurePa,
-            carbonDioxidePartialPressurePa: flue.composition.CO2 * flue.pressurePa,
-            wallEmissivity: inputs.layers[0]!.material.emissivity,
-          }
+        ? makeGreyGasExchange(flue.composition.H2O * flue.pressurePa, flue.composition.CO2 * flue.pressurePa, meanBeamLengthLongCylinder(geometry.innerDiameter), inputs.layers[0]!.material.emissivity)
         : null,
+      radiationRatio: flue.composition.CO2 > 0 ? flue.composition.H2O / flue.composition.CO2 : Infinity,
+      radiationPathLengthAtmM: ((flue.composition.H2O + flue.composition.CO2) * flue.pressurePa * meanBeamLengthLongCylinder(geometry.innerDiameter)) / STANDARD_PRESSURE,
     };
     this.sitePressurePa = sitePressurePa(inputs);
     this.surfaceSpec = {

@@ -231,3 +231,72 @@ export function gasEmissivityWsgg(temperatureK: number, pathLengthAtmM: number, 
 export function wsggWeightSum(fit: WsggFit, temperatureK: number): number {
   return wsggSum(fit, temperatureK, Infinity).value;
 }
+
+/** Net gas-to-wall flux and its wall derivative (see {@link flueGasRadiation}), W/m² and W/(m² K). */
+export interface GreyGasExchange {
+  flux: number;
+  dFluxdWallK: number;
+  emissivity: number;
+}
+
+/**
+ * {@link flueGasRadiation} prepared for one gas and one flue: the grey-gas transmissions
+ * exp(−kᵢ p_a L) and the ratio interpolation depend only on the composition, the pressure and the
+ * beam length, so they are computed once; each call evaluates the weight polynomials at the gas and
+ * the wall temperature and fills `out` (no allocation: the model's hot path). Same results as
+ * flueGasRadiation (to rounding).
+ */
+export function makeGreyGasExchange(
+  waterPartialPressurePa: number,
+  carbonDioxidePartialPressurePa: number,
+  beamLengthM: number,
+  wallEmissivity: number,
+  model: WsggModel = WSGG_SMITH_1982,
+): (gasK: number, wallK: number, out: GreyGasExchange) => GreyGasExchange {
+  const pw = waterPartialPressurePa / STANDARD_PRESSURE;
+  const pc = carbonDioxidePartialPressurePa / STANDARD_PRESSURE;
+  const pathLengthAtmM = (pw + pc) * beamLengthM;
+  const ratio = pc > 0 ? pw / pc : pw > 0 ? Infinity : 1;
+  const f = Math.min(1, Math.max(0, ratio - 1));
+  // each grey gas of each fit with its share of the interpolation and its grey factor
+  const polynomials: (readonly number[])[] = [];
+  const factors: number[] = [];
+  for (const [fit, share] of [[model.ratio1, 1 - f], [model.ratio2, f]] as const) {
+    if (share === 0) continue;
+    fit.absorptionCoefficients.forEach((k, i) => {
+      polynomials.push(fit.weightPolynomials[i]!);
+      factors.push(share * (1 - Math.exp(-k * pathLengthAtmM)));
+    });
+  }
+  const factor = STEFAN_BOLTZMANN * 0.5 * (wallEmissivity + 1);
+  /** Σ share·grey·a(T) and its T-derivative, into `sum`. */
+  const weighted = (t: number, sum: { value: number; dT: number }) => {
+    let value = 0;
+    let dT = 0;
+    for (let i = 0; i < polynomials.length; i++) {
+      const b = polynomials[i]!;
+      let a = 0;
+      let da = 0;
+      for (let j = b.length - 1; j >= 0; j--) {
+        da = da * t + a;
+        a = a * t + b[j]!;
+      }
+      value += a * factors[i]!;
+      dT += da * factors[i]!;
+    }
+    sum.value = value;
+    sum.dT = dT;
+  };
+  const eps = { value: 0, dT: 0 };
+  const alpha = { value: 0, dT: 0 };
+  return (tg, tw, out) => {
+    weighted(tg, eps);
+    weighted(tw, alpha);
+    const tg3 = tg * tg * tg;
+    const tw3 = tw * tw * tw;
+    out.flux = factor * (eps.value * tg3 * tg - alpha.value * tw3 * tw);
+    out.dFluxdWallK = -factor * (alpha.dT * tw3 * tw + 4 * alpha.value * tw3);
+    out.emissivity = eps.value;
+    return out;
+  };
+}

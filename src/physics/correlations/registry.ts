@@ -321,6 +321,8 @@ export type RangeStatus =
   /** Beyond the range (or a condition) where the extrapolation is not justified; `excess` is how far beyond, relative to the bound. */
   | { readonly kind: 'outside'; readonly what: string; readonly excess: number };
 
+const INSIDE: RangeStatus = { kind: 'inside' };
+
 /** Where an evaluation was: run time and height, for messages. */
 export interface EvaluationPlace {
   readonly t: number;
@@ -348,7 +350,7 @@ export function rangeStatus<N extends CorrelationName>(name: N, inputs: Correlat
     return { kind: 'outside', what: `${key} = ${formatNumber(v)} ${side} its published range [${formatNumber(range[0])}, ${formatNumber(range[1])}]`, excess };
   }
   for (const c of e.constraints) if (!c.holds(values)) return { kind: 'outside', what: `violates ${c.label}`, excess: Infinity };
-  return accepted ?? { kind: 'inside' };
+  return accepted ?? INSIDE;
 }
 
 interface TallyEntry {

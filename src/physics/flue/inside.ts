@@ -20,7 +20,7 @@
 import type { GasPropertyLookup, MutableGasProperties } from '../properties/flueGas.ts';
 import { marchThroughSegment, type SegmentMarch } from './march.ts';
 import { naturalConvectionLiningCoefficient } from '../correlations/internal.ts';
-import { flueGasRadiation, meanBeamLengthLongCylinder } from '../correlations/gasRadiation.ts';
+import type { GreyGasExchange } from '../correlations/gasRadiation.ts';
 import { RE_LAMINAR_LIMIT } from '../correlations/internal.ts';
 
 /** What stays fixed for the whole run on the flue side of a segment. */
@@ -43,14 +43,11 @@ export interface FlueSideSpec {
   readonly mixed: (forced: number, natural: number, aiding: number) => number;
   /** Properties of the flue gas at a temperature. */
   readonly gas: GasPropertyLookup;
-  /** Gas radiation to the lining, or null when it is off. */
-  readonly radiation: {
-    /** Partial pressures of H2O and CO2, Pa. */
-    readonly waterPartialPressurePa: number;
-    readonly carbonDioxidePartialPressurePa: number;
-    /** Emissivity of the lining, –. */
-    readonly wallEmissivity: number;
-  } | null;
+  /** Gas radiation to the lining (net flux from the gas at T_gas to the wall at T_wall, prepared for this gas and flue by `makeGreyGasExchange`), or null when it is off. */
+  readonly radiation: ((gasK: number, wallK: number, out: GreyGasExchange) => GreyGasExchange) | null;
+  /** p_H2O/p_CO2 and (p_H2O + p_CO2)·L in atm·m of the radiating gas (for range checks; NaN when off). */
+  readonly radiationRatio: number;
+  readonly radiationPathLengthAtmM: number;
 }
 
 /** The flue side of one segment at one instant. */
@@ -90,6 +87,7 @@ export function emptyFlueSide(): FlueSideOfSegment {
 
 const march: SegmentMarch = { gasOutK: 0, heatW: 0, conductanceWPerK: 0 };
 const natural = { h: 0, rayleigh: 0, nusselt: 0 };
+const exchange: GreyGasExchange = { flux: 0, dFluxdWallK: 0, emissivity: 0 };
 const bulk: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
 const film: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
 const mean: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 0, dynamicViscosity: 0, prandtl: 0 };
@@ -127,21 +125,14 @@ export function flueSideOfSegment(spec: FlueSideSpec, gasInK: number, wallK: num
   }
   let hRadiation = 0;
   if (spec.radiation) {
-    const r = flueGasRadiation({
-      gasTemperatureK: gasInK,
-      wallTemperatureK: wallK,
-      waterPartialPressurePa: spec.radiation.waterPartialPressurePa,
-      carbonDioxidePartialPressurePa: spec.radiation.carbonDioxidePartialPressurePa,
-      beamLengthM: meanBeamLengthLongCylinder(di),
-      wallEmissivity: spec.radiation.wallEmissivity,
-    });
+    const r = spec.radiation(gasInK, wallK, exchange);
     // as a film coefficient on the gas–wall difference (its slope where the two are equal); never
     // negative (the grey-gas weights at two temperatures can leave a tiny wrong-signed residue there)
     const dT = gasInK - wallK;
     hRadiation = Math.max(0, Math.abs(dT) > 0.01 ? r.flux / dT : -r.dFluxdWallK);
     out.gasEmissivity = r.emissivity;
-    out.pathLengthAtmM = r.pathLengthAtmM;
-    out.waterToCarbonDioxide = r.ratio;
+    out.pathLengthAtmM = spec.radiationPathLengthAtmM;
+    out.waterToCarbonDioxide = spec.radiationRatio;
   }
   const hTotal = h + hRadiation;
   if (spec.gasCooling) {

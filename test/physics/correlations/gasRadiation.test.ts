@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import {
   flueGasRadiation,
+  makeGreyGasExchange,
   gasEmissivityWsgg,
   meanBeamLengthLongCylinder,
   WSGG_DORIGON_2013,
@@ -133,5 +134,21 @@ describe('mean beam length and gas–wall exchange', () => {
     expect(Math.abs(r.dFluxdWallK)).toBe(0);
     const dry = flueGasRadiation({ ...FLUE, carbonDioxidePartialPressurePa: 0 });
     expect(Number.isFinite(dry.flux)).toBe(true);
+  });
+});
+
+describe('makeGreyGasExchange (prepared once per flue)', () => {
+  it('gives the same flux, wall derivative and emissivity as flueGasRadiation', () => {
+    // same formulas, the grey factors computed once: equal to rounding
+    for (const [pw, pc] of [[0.17 * 101325, 0.085 * 101325], [0.1 * 101325, 0.1 * 101325], [0.2 * 101325, 0.05 * 101325]] as const) {
+      const prepared = makeGreyGasExchange(pw, pc, 1.33, 0.85);
+      for (const [tg, tw] of [[473.15, 423.15], [1200, 700], [500, 600]]) {
+        const a = flueGasRadiation({ gasTemperatureK: tg, wallTemperatureK: tw, waterPartialPressurePa: pw, carbonDioxidePartialPressurePa: pc, beamLengthM: 1.33, wallEmissivity: 0.85 });
+        const b = prepared(tg, tw, { flux: 0, dFluxdWallK: 0, emissivity: 0 });
+        expect(b.flux).toBeCloseTo(a.flux, 9);
+        expect(b.dFluxdWallK).toBeCloseTo(a.dFluxdWallK, 9);
+        expect(b.emissivity).toBeCloseTo(a.emissivity, 12);
+      }
+    }
   });
 });
