@@ -110,7 +110,7 @@ export interface OuterBoundaryOfSegment {
   radiationPerMetre: number;
   /** Absorbed sun, W/m. */
   sunPerMetre: number;
-  /** ∂(convection + radiation)/∂T_surface, W/(m K), with the film coefficient held (for the Jacobian). */
+  /** ∂(convection + radiation)/∂T_surface, W/(m K), including the growth of natural convection with ΔT (for the Jacobian). */
   sinkPerMetre: number;
   /** The two parts of `sinkPerMetre`: h P and 4 ε σ T_s³ P (with its view factors). */
   convectionSinkPerMetre: number;
@@ -144,6 +144,9 @@ export function emptyOuterBoundary(): OuterBoundaryOfSegment {
 export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number, c: OutsideConditions, film: AirProperties, out: OuterBoundaryOfSegment): OuterBoundaryOfSegment {
   const perimeter = Math.PI * spec.outerDiameter;
   let h: number;
+  // ∂(h ΔT)/∂ΔT: natural convection grows with ΔT (h_N ∝ ΔT^(1/3) on the turbulent branch), so
+  // with h = (h_F³ + h_N³)^(1/3) the slope is h + h_N³/(3 h²) (0 extra for a fixed h)
+  let slopeExtra = 0;
   if (spec.filmCoefficient !== undefined) {
     h = spec.filmCoefficient;
     out.reynolds = Number.NaN;
@@ -155,6 +158,7 @@ export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number,
     const air = airPropertiesInto(film, 0.5 * (surfaceK + c.airTemperatureK), spec.pressurePa);
     const f = outsideFilmCoefficientInto(c.windSpeed, spec.outerDiameter, spec.height, surfaceK, c.airTemperatureK, air, spec.filmCorrelations, filmResult);
     h = f.h;
+    if (h > 0) slopeExtra = (f.hNatural * f.hNatural * f.hNatural) / (3 * h * h);
     out.reynolds = f.re;
     out.rayleigh = f.ra;
     out.grashof = f.grashof;
@@ -170,8 +174,8 @@ export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number,
   out.convectionPerMetre = h * perimeter * (surfaceK - c.airTemperatureK);
   out.radiationPerMetre = radiation;
   out.sunPerMetre = c.sunPerMetre;
-  out.sinkPerMetre = h * perimeter + radiationSink;
-  out.convectionSinkPerMetre = h * perimeter;
+  out.sinkPerMetre = (h + slopeExtra) * perimeter + radiationSink;
+  out.convectionSinkPerMetre = (h + slopeExtra) * perimeter;
   out.radiationSinkPerMetre = radiationSink;
   out.filmCoefficient = h;
   return out;
