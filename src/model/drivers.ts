@@ -23,8 +23,10 @@ export interface Drivers {
   sunAzimuthDeg: number;
   beamNormal: number;
   diffuseHorizontal: number;
-  /** Absorbed sun per metre of height, W/m (circumferential mean; same at every height). */
+  /** Absorbed sun per metre of height, W/m (round the whole circumference; same at every height). */
   sunPerMetre: number;
+  /** Its sky-diffuse and ground-reflected part, W/m (the same on every side; the rest is beam). */
+  sunDiffusePerMetre: number;
   inletTemperatureK: number;
   massFlow: number;
   firing: boolean;
@@ -63,16 +65,21 @@ export function evaluateDrivers(ctx: DriverContext, tRun: number, out: Drivers):
   out.sunAzimuthDeg = sun.azimuthDeg;
   out.beamNormal = sun.beamNormal;
   out.diffuseHorizontal = sun.diffuseHorizontal;
-  out.sunPerMetre = inputs.outside.sun
-    ? absorbedSunPerMetre({
-        beamNormal: sun.beamNormal,
-        diffuseHorizontal: sun.diffuseHorizontal,
-        altitudeDeg: sun.altitudeDeg,
-        outerDiameter: ctx.outerDiameter,
-        solarAbsorptance: inputs.surface.solarAbsorptance,
-        groundReflectance: inputs.site.groundReflectance,
-      }).total
-    : 0;
+  if (inputs.outside.sun) {
+    const absorbed = absorbedSunPerMetre({
+      beamNormal: sun.beamNormal,
+      diffuseHorizontal: sun.diffuseHorizontal,
+      altitudeDeg: sun.altitudeDeg,
+      outerDiameter: ctx.outerDiameter,
+      solarAbsorptance: inputs.surface.solarAbsorptance,
+      groundReflectance: inputs.site.groundReflectance,
+    });
+    out.sunPerMetre = absorbed.total;
+    out.sunDiffusePerMetre = absorbed.diffuse + absorbed.reflected;
+  } else {
+    out.sunPerMetre = 0;
+    out.sunDiffusePerMetre = 0;
+  }
 
   // (a warm-up run starts at firing start, so the schedule applies from its first instant)
   const f = ctx.schedule.at(clock.dayIndex(t), clock.localSecondsOfDay(t));
@@ -95,6 +102,7 @@ export function emptyDrivers(): Drivers {
     beamNormal: 0,
     diffuseHorizontal: 0,
     sunPerMetre: 0,
+    sunDiffusePerMetre: 0,
     inletTemperatureK: 0,
     massFlow: 0,
     firing: false,

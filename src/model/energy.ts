@@ -13,9 +13,13 @@ import { AUX_CONVECTION, AUX_GAS_TO_WALL, AUX_RADIATION, AUX_SUN, type StackGeom
  */
 export function energyAccount(mesh: WallMesh, geometry: StackGeometry, aux: Float64Array, yStart: Float64Array, yEnd: Float64Array, periodS: number): EnergyAccount {
   const n = mesh.nodeCount;
+  // columns: segments × sectors; each sector's nodes stand for the whole circumference (1/sectors of it is its own)
+  const columns = yStart.length / n;
+  const share = geometry.segments / columns;
   let stored = 0;
-  for (let s = 0; s < geometry.segments; s++)
-    for (let i = 0; i < n; i++) stored += nodeEnthalpyChange(mesh, i, yStart[s * n + i]!, yEnd[s * n + i]!) * geometry.segmentLength;
+  for (let c = 0; c < columns; c++)
+    for (let i = 0; i < n; i++) stored += nodeEnthalpyChange(mesh, i, yStart[c * n + i]!, yEnd[c * n + i]!) * geometry.segmentLength;
+  if (share !== 1) stored *= share;
   const gas = aux[AUX_GAS_TO_WALL]!;
   const conv = aux[AUX_CONVECTION]!;
   const rad = aux[AUX_RADIATION]!;

@@ -38,6 +38,12 @@ export interface StackInput {
   readonly height: number;
   readonly innerDiameter: number;
   readonly segments: number;
+  /**
+   * Circumferential sectors of the wall (default 1: the circumferentially averaged wall). With more,
+   * each sector has its own radial nodes, its own share of the sun and its own outside exchange;
+   * neighbouring sectors exchange heat round the circumference.
+   */
+  readonly sectors?: number;
 }
 
 /** One wall layer, inside → outside (the mesh's `WallLayer`). */

@@ -108,9 +108,13 @@ export class Recorder {
     this.day.push(day);
     this.temps.pushAll(y);
     let gasSum = 0;
+    const ns = y.length / (S * n);
     for (let s = 0; s < S; s++) {
-      this.water[s] = y[s * n]! - this.waterDew;
-      this.acid[s] = this.acidDew === null ? Number.NaN : y[s * n]! - this.acidDew;
+      // the coldest sector's inner surface governs the dew-point margins
+      let inner = y[s * ns * n]!;
+      for (let j = 1; j < ns; j++) inner = Math.min(inner, y[(s * ns + j) * n]!);
+      this.water[s] = inner - this.waterDew;
+      this.acid[s] = this.acidDew === null ? Number.NaN : inner - this.acidDew;
       gasSum += 0.5 * (diag.gasInK[s]! + diag.gasOutK[s]!);
     }
     checkCorrelationRanges(this.ctx, t, y, diag, this.ranges);
@@ -136,6 +140,7 @@ export class Recorder {
       isoLocal: this.iso,
       day: Int32Array.from(this.day),
       segments: geometry.segments,
+      sectors: this.temps.length / Math.max(1, this.t.length) / (geometry.segments * mesh.nodeCount) || 1,
       nodes: mesh.nodeCount,
       heightM: geometry.midHeight,
       nodeRadius: mesh.radius,

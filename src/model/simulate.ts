@@ -100,7 +100,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
 
   // ---- recording ----
   const rec = new Recorder(model);
-  const diag = makeSegmentDiagnostics(geometry.segments);
+  const diag = makeSegmentDiagnostics(geometry.segments, system.sectors);
   const record = (t: number, state: Float64Array, dayNumber: number) => {
     system.boundaries(t, state, diag);
     // a repeated first day is reported on that day's clock

@@ -2,8 +2,14 @@
  * The semi-discrete wall model of the whole stack as an ODE system C(T) dT/dt = f(t, T)
  * (docs/model.md), in the form the integrators take: dT/dt = f / C.
  *
- * Unknowns: node temperatures, segment by segment from the bottom (index s·n + i). The model only
- * composes: radial conduction through the mesh, the flue side of each segment
+ * Unknowns: node temperatures, segment by segment from the bottom, sector by sector within a
+ * segment (index (s·N_sec + j)·n + i; one sector: s·n + i). A (segment, sector) pair is a column of
+ * n radial nodes. Every per-column quantity (capacity, radial conductance, boundary flows, sinks)
+ * is stated for the whole circumference as if it were all like that sector ("full-circumference
+ * equivalent", W per metre of height): the sector's own share is 1/N_sec of it, so the whole-stack
+ * flows are the means over the sectors, and the conductance between two sectors enters N_sec times
+ * its own value. (dT/dt is unchanged by that common scale.) The model only composes: radial conduction through the mesh, circumferential
+ * conduction between neighbouring sectors (more than one sector), the flue side of each segment
  * (physics/flue/inside.ts: the gas marching up, heat into the inner surface) and the outer boundary
  * of each segment (physics/outside/boundary.ts: convection, radiation, sun). Quadrature channels
  * (W, whole stack): heat from the gas into the wall, outside convection, outside radiation, absorbed
@@ -15,14 +21,17 @@ import { REPORTED_BOUNDARY_CHANNELS } from './timeseries.ts';
 import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../physics/wall/mesh.ts';
 import { gapConductancePerMetre } from '../physics/wall/gap.ts';
 import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
-import { airPropertiesAt } from '../physics/properties/air.ts';
+import { airPropertiesAt, airPropertiesInto } from '../physics/properties/air.ts';
+import { makeTableLookup } from '../physics/properties/table.ts';
+import { circumferentialConductancePerMetre } from '../physics/wall/circumferential.ts';
+import { beamOnSector } from '../physics/sun/sectors.ts';
 import type { GasPropertyLookup } from '../physics/properties/flueGas.ts';
-import { flueSideOfSegment, emptyFlueSide, type FlueSideSpec } from '../physics/flue/inside.ts';
+import { flueSideOfSegment, flueSideOfSectors, emptyFlueSide, type FlueSideSpec, type FlueSideOfSectors } from '../physics/flue/inside.ts';
 import { outerBoundaryOfSegment, emptyOuterBoundary, type OuterSurfaceSpec, type OuterBoundaryOfSegment } from '../physics/outside/boundary.ts';
 import { gapConvectionRatio, insideMixed, insideNaturalNusselt, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
 import { sitePressurePa } from './site.ts';
 import { makeGreyGasExchange, meanBeamLengthLongCylinder } from '../physics/correlations/gasRadiation.ts';
-import { STANDARD_PRESSURE } from '../physics/constants.ts';
+import { STANDARD_PRESSURE, STEFAN_BOLTZMANN } from '../physics/constants.ts';
 
 export const AUX_GAS_TO_WALL = 0;
 export const AUX_CONVECTION = 1;
@@ -59,11 +68,21 @@ export const SEGMENT_CHANNELS = [
 
 export type SegmentChannel = (typeof SEGMENT_CHANNELS)[number];
 
-/** One Float64Array (one value per segment) per channel. */
-export type SegmentDiagnostics = Record<SegmentChannel, Float64Array>;
+/**
+ * One Float64Array per channel: one value per segment; with several sectors, `columns` holds the
+ * outer-boundary channels per column (segment s, sector j at s·N_sec + j), and the segment values
+ * are their sums (heat flows per metre) or means (film coefficient, dimensionless groups).
+ */
+export type SegmentDiagnostics = Record<SegmentChannel, Float64Array> & { readonly columns: Record<ColumnChannel, Float64Array> | null };
 
-export function makeSegmentDiagnostics(segments: number): SegmentDiagnostics {
-  return Object.fromEntries(SEGMENT_CHANNELS.map((c) => [c, new Float64Array(segments)])) as SegmentDiagnostics;
+/** Outer-boundary channels kept per column when the wall has sectors. */
+export const COLUMN_CHANNELS = ['outsideFilm', 'convectionPerMetre', 'radiationPerMetre', 'sunPerMetre', 'reynoldsOutside', 'rayleighOutside', 'grashofOutside', 'prandtlOutside', 'slenderOutside'] as const;
+export type ColumnChannel = (typeof COLUMN_CHANNELS)[number];
+
+export function makeSegmentDiagnostics(segments: number, sectors = 1): SegmentDiagnostics {
+  const perSegment = Object.fromEntries(SEGMENT_CHANNELS.map((c) => [c, new Float64Array(segments)])) as Record<SegmentChannel, Float64Array>;
+  const columns = sectors > 1 ? (Object.fromEntries(COLUMN_CHANNELS.map((c) => [c, new Float64Array(segments * sectors)])) as Record<ColumnChannel, Float64Array>) : null;
+  return Object.assign(perSegment, { columns });
 }
 
 export interface StackGeometry {
@@ -80,15 +99,20 @@ export interface StackGeometry {
 export class StackWallSystem implements OdeSystem {
   readonly size: number;
   readonly auxSize = AUX_SIZE;
+  /** Nodes per column. */
   readonly n: number;
+  /** Circumferential sectors (1: the averaged wall). */
+  readonly sectors: number;
+  /** Columns: segments × sectors. */
+  readonly columns: number;
   private readonly drivers: Drivers = emptyDrivers();
   private readonly conductance: Float64Array;
   private readonly capacity: Float64Array;
-  private readonly innerSink: Float64Array; // −∂q'_in/∂T_0 per segment (≥ 0)
-  private readonly outerSink: Float64Array; // ∂q'_out/∂T_N per segment (≥ 0, heat leaving)
-  private readonly convectionSink: Float64Array; // its convection part
-  private readonly radiationSink: Float64Array; // its radiation part
-  /** Per segment, W per metre of height: from the gas into the wall, convection and radiation out, sun in. */
+  /** Per column (W per metre of height, W/(m K)): heat from the gas, its sink −∂q′/∂T₀; convection, radiation, sun at the outer surface, and the sinks ∂q′/∂T_N. */
+  private readonly innerSink: Float64Array;
+  private readonly outerSink: Float64Array;
+  private readonly convectionSink: Float64Array;
+  private readonly radiationSink: Float64Array;
   private readonly flueToWall: Float64Array;
   private readonly convectionOut: Float64Array;
   private readonly radiationOut: Float64Array;
@@ -96,9 +120,13 @@ export class StackWallSystem implements OdeSystem {
   private readonly flueSpec: FlueSideSpec;
   private readonly surfaceSpec: OuterSurfaceSpec;
   private readonly flue = emptyFlueSide();
+  private readonly flueSectors: FlueSideOfSectors;
   private readonly outer: OuterBoundaryOfSegment = emptyOuterBoundary();
   private readonly film = airPropertiesAt(300);
   private readonly outside = { airTemperatureK: 0, windSpeed: 0, skyTemperatureK: 0, groundTemperatureK: 0, sunPerMetre: 0 };
+  /** Sector models: every node's capacity (rhs), the circumferential links and their conductances. */
+  private readonly capacityAll: Float64Array;
+  private readonly circumferential: CircumferentialLinks | null;
   /** Atmospheric pressure at the site, Pa (outside air, air in gaps). */
   readonly sitePressurePa: number;
   /** Instant and state fingerprint at which `innerSink`/`outerSink` were last computed (reused by `jacobian`). */
@@ -113,17 +141,23 @@ export class StackWallSystem implements OdeSystem {
     readonly gas: GasPropertyLookup,
   ) {
     this.n = mesh.nodeCount;
-    this.size = this.n * geometry.segments;
+    this.sectors = inputs.stack.sectors ?? 1;
+    this.columns = geometry.segments * this.sectors;
+    this.size = this.n * this.columns;
     this.conductance = new Float64Array(Math.max(1, this.n - 1));
     this.capacity = new Float64Array(this.n);
-    this.innerSink = new Float64Array(geometry.segments);
-    this.outerSink = new Float64Array(geometry.segments);
-    this.convectionSink = new Float64Array(geometry.segments);
-    this.radiationSink = new Float64Array(geometry.segments);
-    this.flueToWall = new Float64Array(geometry.segments);
-    this.convectionOut = new Float64Array(geometry.segments);
-    this.radiationOut = new Float64Array(geometry.segments);
-    this.sunIn = new Float64Array(geometry.segments);
+    const perColumn = () => new Float64Array(this.columns);
+    this.innerSink = perColumn();
+    this.outerSink = perColumn();
+    this.convectionSink = perColumn();
+    this.radiationSink = perColumn();
+    this.flueToWall = perColumn();
+    this.convectionOut = perColumn();
+    this.radiationOut = perColumn();
+    this.sunIn = perColumn();
+    this.flueSectors = { heatPerMetre: new Float64Array(this.sectors), sinkPerMetre: new Float64Array(this.sectors) };
+    this.capacityAll = new Float64Array(this.sectors > 1 ? this.size : 0);
+    this.circumferential = this.sectors > 1 ? circumferentialLinks(mesh, this.sectors) : null;
     const flue = inputs.flue;
     this.flueSpec = {
       innerDiameter: geometry.innerDiameter,
@@ -153,7 +187,7 @@ export class StackWallSystem implements OdeSystem {
     };
   }
 
-  /** Conductances per metre of height of the links of the segment whose nodes start at offset o. */
+  /** Conductances per metre of height of the links of the column whose nodes start at offset o. */
   private fillConductances(y: Float64Array, o: number): void {
     const mesh = this.mesh;
     for (let i = 0; i < this.n - 1; i++) {
@@ -176,14 +210,16 @@ export class StackWallSystem implements OdeSystem {
 
   /** dT/dt and the quadrature rates (whole-stack heat flows) at (t, y). */
   rhs(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array): void {
-    const { mesh, geometry } = this;
+    const { mesh } = this;
     const n = this.n;
+    const several = this.sectors > 1;
     this.boundaries(t, y, null);
-    for (let s = 0; s < geometry.segments; s++) {
-      const o = s * n;
+    for (let col = 0; col < this.columns; col++) {
+      const o = col * n;
       this.fillConductances(y, o);
+      const capacity = several ? this.capacityAll.subarray(o, o + n) : this.capacity;
       for (let i = 0; i < n; i++) {
-        this.capacity[i] = nodeCapacity(mesh, i, y[o + i]!);
+        capacity[i] = nodeCapacity(mesh, i, y[o + i]!);
         dydt[o + i] = 0;
       }
       for (let i = 0; i < n - 1; i++) {
@@ -191,57 +227,104 @@ export class StackWallSystem implements OdeSystem {
         dydt[o + i] -= q;
         dydt[o + i + 1] += q;
       }
-      dydt[o] += this.flueToWall[s]!;
-      dydt[o + n - 1] += this.sunIn[s]! - this.convectionOut[s]! - this.radiationOut[s]!;
-      for (let i = 0; i < n; i++) dydt[o + i] /= this.capacity[i]!;
+      dydt[o] += this.flueToWall[col]!;
+      dydt[o + n - 1] += this.sunIn[col]! - this.convectionOut[col]! - this.radiationOut[col]!;
+      if (!several) for (let i = 0; i < n; i++) dydt[o + i] /= capacity[i]!;
     }
-    const dz = geometry.segmentLength;
+    if (several) {
+      this.circumferentialFlows(y, dydt);
+      for (let k = 0; k < this.size; k++) dydt[k] /= this.capacityAll[k]!;
+    }
+    const dz = this.geometry.segmentLength;
     let qGas = 0;
     let qConv = 0;
     let qRad = 0;
     let qSun = 0;
-    for (let s = 0; s < geometry.segments; s++) {
-      qGas += this.flueToWall[s]! * dz;
-      qConv += this.convectionOut[s]! * dz;
-      qRad += this.radiationOut[s]! * dz;
-      qSun += this.sunIn[s]! * dz;
+    for (let col = 0; col < this.columns; col++) {
+      qGas += this.flueToWall[col]! * dz;
+      qConv += this.convectionOut[col]! * dz;
+      qRad += this.radiationOut[col]! * dz;
+      qSun += this.sunIn[col]! * dz;
     }
-    aux[AUX_GAS_TO_WALL] = qGas;
-    aux[AUX_CONVECTION] = qConv;
-    aux[AUX_RADIATION] = qRad;
-    aux[AUX_SUN] = qSun;
+    // per-column flows are full-circumference equivalents (see the module comment)
+    const share = 1 / this.sectors;
+    aux[AUX_GAS_TO_WALL] = several ? qGas * share : qGas;
+    aux[AUX_CONVECTION] = several ? qConv * share : qConv;
+    aux[AUX_RADIATION] = several ? qRad * share : qRad;
+    aux[AUX_SUN] = several ? qSun * share : qSun;
+  }
+
+  /** Heat round the circumference between neighbouring sectors, added to the node balances in `dydt` (W/m). */
+  private circumferentialFlows(y: Float64Array, dydt: Float64Array): void {
+    const links = this.circumferential!;
+    const n = this.n;
+    const ns = this.sectors;
+    for (let s = 0; s < this.geometry.segments; s++) {
+      for (let j = 0; j < ns; j++) {
+        const a = (s * ns + j) * n;
+        const b = (s * ns + ((j + 1) % ns)) * n;
+        for (let i = 0; i < n; i++) {
+          const q = ns * links.conductance(i, 0.5 * (y[a + i]! + y[b + i]!)) * (y[a + i]! - y[b + i]!);
+          dydt[a + i] -= q;
+          dydt[b + i] += q;
+        }
+      }
+    }
   }
 
   /**
-   * Flue side and outside of every segment at (t, y): heat from the gas into the inner surface
-   * (marching the gas up), and convection, radiation and absorbed sun at the outer surface, each
-   * per metre of height, with their derivatives for the Jacobian. With `diag`, also the
-   * per-segment quantities reports need (no conduction is evaluated).
+   * Flue side and outside of every column at (t, y): heat from the gas into the inner surfaces
+   * (marching the gas up), and convection, radiation and absorbed sun at the outer surfaces, each
+   * per metre of height, with their derivatives for the Jacobian. With `diag`, also the quantities
+   * reports need (no conduction is evaluated).
    */
   boundaries(t: number, y: Float64Array, diag: SegmentDiagnostics | null): void {
     const d = this.driversAt(t);
     const { geometry, flue, outer, outside } = this;
     const n = this.n;
+    const ns = this.sectors;
     outside.airTemperatureK = d.airTemperatureK;
     outside.skyTemperatureK = d.skyTemperatureK;
     outside.groundTemperatureK = d.groundTemperatureK;
-    outside.sunPerMetre = d.sunPerMetre;
     let gasIn = d.inletTemperatureK;
 
     for (let s = 0; s < geometry.segments; s++) {
-      const o = s * n;
-      flueSideOfSegment(this.flueSpec, gasIn, y[o]!, d.massFlow, flue);
-      this.flueToWall[s] = flue.heatPerMetre;
-      this.innerSink[s] = flue.sinkPerMetre;
+      if (ns === 1) {
+        flueSideOfSegment(this.flueSpec, gasIn, y[s * n]!, d.massFlow, flue);
+        this.flueToWall[s] = flue.heatPerMetre;
+        this.innerSink[s] = flue.sinkPerMetre;
+      } else {
+        flueSideOfSectors(this.flueSpec, gasIn, y, s * ns * n, n, ns, d.massFlow, flue, this.flueSectors);
+        for (let j = 0; j < ns; j++) {
+          this.flueToWall[s * ns + j] = ns * this.flueSectors.heatPerMetre[j]!;
+          this.innerSink[s * ns + j] = ns * this.flueSectors.sinkPerMetre[j]!;
+        }
+      }
 
       outside.windSpeed = d.windSpeedRef * geometry.windFactor[s]!;
-      outerBoundaryOfSegment(this.surfaceSpec, y[o + n - 1]!, outside, this.film, outer);
-      this.convectionOut[s] = outer.convectionPerMetre;
-      this.radiationOut[s] = outer.radiationPerMetre;
-      this.sunIn[s] = outer.sunPerMetre;
-      this.outerSink[s] = outer.sinkPerMetre;
-      this.convectionSink[s] = outer.convectionSinkPerMetre;
-      this.radiationSink[s] = outer.radiationSinkPerMetre;
+      for (let j = 0; j < ns; j++) {
+        const col = s * ns + j;
+        outside.sunPerMetre = ns === 1 ? d.sunPerMetre : this.inputs.outside.sun ? ns * sunOnSector(d, this.inputs.surface.solarAbsorptance, geometry.outerDiameter, j, ns) : 0;
+        outerBoundaryOfSegment(this.surfaceSpec, y[col * n + n - 1]!, outside, this.film, outer);
+        this.convectionOut[col] = outer.convectionPerMetre;
+        this.radiationOut[col] = outer.radiationPerMetre;
+        this.sunIn[col] = outer.sunPerMetre;
+        this.outerSink[col] = outer.sinkPerMetre;
+        this.convectionSink[col] = outer.convectionSinkPerMetre;
+        this.radiationSink[col] = outer.radiationSinkPerMetre;
+        if (diag?.columns) {
+          const c = diag.columns;
+          c.outsideFilm[col] = outer.filmCoefficient;
+          c.convectionPerMetre[col] = outer.convectionPerMetre;
+          c.radiationPerMetre[col] = outer.radiationPerMetre;
+          c.sunPerMetre[col] = outer.sunPerMetre;
+          c.reynoldsOutside[col] = outer.reynolds;
+          c.rayleighOutside[col] = outer.rayleigh;
+          c.grashofOutside[col] = outer.grashof;
+          c.prandtlOutside[col] = outer.prandtl;
+          c.slenderOutside[col] = outer.slenderCorrected ? 1 : 0;
+        }
+      }
 
       if (diag) {
         diag.gasInK[s] = gasIn;
@@ -249,17 +332,8 @@ export class StackWallSystem implements OdeSystem {
         diag.insideFilm[s] = flue.filmCoefficient;
         diag.gasToWallPerMetre[s] = flue.heatPerMetre;
         diag.windAtHeight[s] = outside.windSpeed;
-        diag.outsideFilm[s] = outer.filmCoefficient;
-        diag.convectionPerMetre[s] = outer.convectionPerMetre;
-        diag.radiationPerMetre[s] = outer.radiationPerMetre;
-        diag.sunPerMetre[s] = outer.sunPerMetre;
         diag.reynoldsInside[s] = flue.reynolds;
         diag.prandtlInside[s] = flue.prandtl;
-        diag.reynoldsOutside[s] = outer.reynolds;
-        diag.rayleighOutside[s] = outer.rayleigh;
-        diag.grashofOutside[s] = outer.grashof;
-        diag.prandtlOutside[s] = outer.prandtl;
-        diag.slenderOutside[s] = outer.slenderCorrected ? 1 : 0;
         diag.forcedFilmInside[s] = flue.forcedFilm;
         diag.naturalFilmInside[s] = flue.naturalFilm;
         diag.aidingInside[s] = flue.aiding;
@@ -268,6 +342,35 @@ export class StackWallSystem implements OdeSystem {
         diag.gasEmissivity[s] = flue.gasEmissivity;
         diag.pathLengthAtmM[s] = flue.pathLengthAtmM;
         diag.waterToCarbonDioxide[s] = flue.waterToCarbonDioxide;
+        if (ns === 1) {
+          diag.outsideFilm[s] = outer.filmCoefficient;
+          diag.convectionPerMetre[s] = outer.convectionPerMetre;
+          diag.radiationPerMetre[s] = outer.radiationPerMetre;
+          diag.sunPerMetre[s] = outer.sunPerMetre;
+          diag.reynoldsOutside[s] = outer.reynolds;
+          diag.rayleighOutside[s] = outer.rayleigh;
+          diag.grashofOutside[s] = outer.grashof;
+          diag.prandtlOutside[s] = outer.prandtl;
+          diag.slenderOutside[s] = outer.slenderCorrected ? 1 : 0;
+        } else {
+          // the segment's values: circumferential means (for the heat flows, full-circumference
+          // equivalents averaged over the sectors are the segment's totals per metre)
+          const c = diag.columns!;
+          const mean = (a: Float64Array) => {
+            let v = 0;
+            for (let j = 0; j < ns; j++) v += a[s * ns + j]!;
+            return v / ns;
+          };
+          diag.outsideFilm[s] = mean(c.outsideFilm);
+          diag.convectionPerMetre[s] = mean(c.convectionPerMetre);
+          diag.radiationPerMetre[s] = mean(c.radiationPerMetre);
+          diag.sunPerMetre[s] = mean(c.sunPerMetre);
+          diag.reynoldsOutside[s] = c.reynoldsOutside[s * ns]!;
+          diag.rayleighOutside[s] = mean(c.rayleighOutside);
+          diag.grashofOutside[s] = mean(c.grashofOutside);
+          diag.prandtlOutside[s] = mean(c.prandtlOutside);
+          diag.slenderOutside[s] = mean(c.slenderOutside) > 0 ? 1 : 0;
+        }
       }
       gasIn = flue.gasOutK;
     }
@@ -288,44 +391,94 @@ export class StackWallSystem implements OdeSystem {
     let gas = 0;
     let conv = 0;
     let rad = 0;
-    for (let s = 0; s < this.geometry.segments; s++) {
-      const dInner = delta[s * n]!;
-      const dOuter = delta[s * n + n - 1]!;
-      gas -= this.innerSink[s]! * dInner;
-      conv += this.convectionSink[s]! * dOuter;
-      rad += this.radiationSink[s]! * dOuter;
+    for (let col = 0; col < this.columns; col++) {
+      const dInner = delta[col * n]!;
+      const dOuter = delta[col * n + n - 1]!;
+      gas -= this.innerSink[col]! * dInner;
+      conv += this.convectionSink[col]! * dOuter;
+      rad += this.radiationSink[col]! * dOuter;
     }
-    aux[AUX_GAS_TO_WALL] += gas * dz;
-    aux[AUX_CONVECTION] += conv * dz;
-    aux[AUX_RADIATION] += rad * dz;
+    const share = this.sectors > 1 ? dz / this.sectors : dz;
+    aux[AUX_GAS_TO_WALL] += gas * share;
+    aux[AUX_CONVECTION] += conv * share;
+    aux[AUX_RADIATION] += rad * share;
   }
 
   /**
-   * Tridiagonal Jacobian of dT/dt: conduction with conductances frozen at the current state, the
-   * local flue-side and outside sinks on the surface nodes. The dependence of a segment's inlet gas
-   * temperature on the walls below is left out (it only slows Newton a little).
+   * Tridiagonal Jacobian of dT/dt: radial conduction with conductances frozen at the current state,
+   * the local flue-side and outside sinks on the surface nodes. Left out (they only slow Newton a
+   * little, never change the answer): the dependence of a segment's inlet gas temperature on the
+   * walls below, and the couplings between neighbouring sectors, whose conductances stay on the
+   * diagonal (they are small next to the radial ones: Δr ≪ r Δφ).
    */
   jacobian(t: number, y: Float64Array, lower: Float64Array, diag: Float64Array, upper: Float64Array): void {
     // the surface sinks at this state (already there when the last rhs call was at this state)
     const n = this.n;
     if (!(this.sinksT === t && this.sinksFingerprint === fingerprint(y))) this.boundaries(t, y, null);
-    const { mesh, geometry } = this;
-    for (let s = 0; s < geometry.segments; s++) {
-      const o = s * n;
+    const { mesh } = this;
+    const links = this.circumferential;
+    const ns = this.sectors;
+    for (let col = 0; col < this.columns; col++) {
+      const o = col * n;
       this.fillConductances(y, o);
+      const left = links ? (col - (col % ns) + ((col % ns) + ns - 1) % ns) * n : 0;
+      const right = links ? (col - (col % ns) + ((col % ns) + 1) % ns) * n : 0;
       for (let i = 0; i < n; i++) {
         const c = nodeCapacity(mesh, i, y[o + i]!);
         const gl = i > 0 ? this.conductance[i - 1]! : 0;
         const gu = i < n - 1 ? this.conductance[i]! : 0;
         let dd = -(gl + gu);
-        if (i === 0) dd -= this.innerSink[s]!;
-        if (i === n - 1) dd -= this.outerSink[s]!;
+        if (i === 0) dd -= this.innerSink[col]!;
+        if (i === n - 1) dd -= this.outerSink[col]!;
+        if (links) dd -= ns * (links.conductance(i, 0.5 * (y[o + i]! + y[left + i]!)) + links.conductance(i, 0.5 * (y[o + i]! + y[right + i]!)));
         lower[o + i] = i > 0 ? gl / c : 0;
         upper[o + i] = i < n - 1 ? gu / c : 0;
         diag[o + i] = dd / c;
       }
     }
   }
+}
+
+/**
+ * Sun absorbed by sector j of n, W per metre of height: its beam (exact over the sector's arc,
+ * physics/sun/sectors.ts) and its share of the diffuse and ground-reflected light, which fall on
+ * every side alike. Summed over the sectors: the averaged wall's total.
+ */
+function sunOnSector(d: Drivers, solarAbsorptance: number, outerDiameter: number, j: number, n: number): number {
+  const beam = beamOnSector(d.beamNormal, d.sunAltitudeDeg, d.sunAzimuthDeg, j, n);
+  return (solarAbsorptance * beam * Math.PI * outerDiameter) / n + d.sunDiffusePerMetre / n;
+}
+
+/** Circumferential conductance of each radial node between two neighbouring sectors, W/(m K), at a temperature. */
+interface CircumferentialLinks {
+  conductance(node: number, temperatureK: number): number;
+}
+
+/**
+ * The links round the circumference of a mesh cut into n sectors: each node's control volume
+ * conducts over the arc r Δφ (physics/wall/circumferential.ts) with the conductivity of each of its
+ * materials; the face nodes of an air gap also carry half the gap, as still air plus a radiative
+ * conductivity 4 σ T³ w / (1/ε₁ + 1/ε₂ − 1) (the equivalent conductivity of a cavity, used here as
+ * an estimate of the radiation along a narrow gap).
+ */
+function circumferentialLinks(mesh: WallMesh, sectors: number): CircumferentialLinks {
+  const dphi = (2 * Math.PI) / sectors;
+  const kA = mesh.capMaterialA.map((m) => (m ? makeTableLookup(m.conductivity) : null));
+  const kB = mesh.capMaterialB.map((m) => (m ? makeTableLookup(m.conductivity) : null));
+  const air = airPropertiesAt(300);
+  return {
+    conductance(i, t) {
+      const r = mesh.radius[i]!;
+      let kw = 0;
+      const a = kA[i];
+      const b = kB[i];
+      if (a) kw += a(t) * mesh.radialExtentA[i]!;
+      if (b) kw += b(t) * mesh.radialExtentB[i]!;
+      const gap = mesh.gapWidthAtNode[i]!;
+      if (gap > 0) kw += 0.5 * gap * (airPropertiesInto(air, t).conductivity + 4 * STEFAN_BOLTZMANN * t * t * t * gap * mesh.gapRadiationFactorAtNode[i]!);
+      return circumferentialConductancePerMetre(kw, 1, r, dphi);
+    },
+  };
 }
 
 /** A cheap fingerprint of a state vector (position-weighted sum), to recognise a repeated state. */

@@ -53,6 +53,8 @@ export interface TimeSeries {
   /** Day index (0-based, counted from the first simulated day) of each output instant. */
   readonly day: Int32Array;
   readonly segments: number;
+  /** Circumferential sectors: temperatures are then [((k · segments + s) · sectors + j) · nodes + i] (1: as above). */
+  readonly sectors: number;
   readonly nodes: number;
   /** Mid-height of each segment, m. */
   readonly heightM: Float64Array;

@@ -156,6 +156,7 @@ const stack = z.strictObject({
   height: quantity('length', { min: 0, exclusiveMin: true, max: 500, wording: 'a height above 0 m and up to 500 m' }, 'Height of the stack above its base'),
   inner_diameter: quantity('length', { min: 0.05, max: 30, wording: 'a diameter from 0.05 m to 30 m' }, 'Inner (flue) diameter'),
   segments: count(1, 200, 'Axial segments the height is cut into').default(12),
+  sectors: count(1, 72, 'Circumferential sectors of the wall: 1 averages the sun round the circumference; 8 to 36 resolve the sun-facing side').default(1),
   layers: z.array(layer).min(1).meta({ description: 'Wall layers from the flue side outward.' }),
 });
 

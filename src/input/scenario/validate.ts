@@ -230,7 +230,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       ...(typeof s.site.terrain === 'string' ? { siteTerrain: s.site.terrain, stationTerrain: s.weather.wind_station_terrain } : {}),
       pressurePa: sitePressure,
     },
-    stack: { height: s.stack.height, innerDiameter: s.stack.inner_diameter, segments: s.stack.segments },
+    stack: { height: s.stack.height, innerDiameter: s.stack.inner_diameter, segments: s.stack.segments, ...(s.stack.sectors > 1 ? { sectors: s.stack.sectors } : {}) },
     layers,
     surface: { emissivity: s.surface.emissivity, solarAbsorptance: s.surface.solar_absorptance },
     outside: {

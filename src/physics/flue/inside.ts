@@ -102,8 +102,31 @@ const mean: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 
  */
 export function flueSideOfSegment(spec: FlueSideSpec, gasInK: number, wallK: number, massFlow: number, out: FlueSideOfSegment): FlueSideOfSegment {
   const di = spec.innerDiameter;
-  const gas = spec.gas(gasInK, bulk);
   const dz = spec.segmentLength;
+  const gas = insideFilmOfWall(spec, gasInK, wallK, massFlow, out);
+  const hTotal = out.filmCoefficient + out.radiationFilm;
+  if (spec.gasCooling) {
+    marchThroughSegment(gasInK, wallK, hTotal * Math.PI * di * dz, massFlow * gas.specificHeat, march);
+    const cpMean = spec.gas(0.5 * (gasInK + march.gasOutK), mean).specificHeat;
+    out.gasOutK = march.gasOutK;
+    out.heatPerMetre = (massFlow * cpMean * (gasInK - march.gasOutK)) / dz;
+    out.sinkPerMetre = march.conductanceWPerK / dz;
+  } else {
+    out.gasOutK = gasInK;
+    out.heatPerMetre = hTotal * Math.PI * di * (gasInK - wallK);
+    out.sinkPerMetre = hTotal * Math.PI * di;
+  }
+  return out;
+}
+
+/**
+ * The inside film at one wall temperature: convection (fixed, or forced and natural together) and
+ * gas radiation as a film coefficient, with their diagnostics, written into `out`; returns the
+ * gas's bulk properties (valid until the next call).
+ */
+function insideFilmOfWall(spec: FlueSideSpec, gasInK: number, wallK: number, massFlow: number, out: FlueSideOfSegment): MutableGasProperties {
+  const di = spec.innerDiameter;
+  const gas = spec.gas(gasInK, bulk);
   const reynolds = (4 * massFlow) / (Math.PI * di * gas.dynamicViscosity);
   let h: number;
   if (spec.filmCoefficient !== undefined) {
@@ -134,21 +157,84 @@ export function flueSideOfSegment(spec: FlueSideSpec, gasInK: number, wallK: num
     out.pathLengthAtmM = spec.radiationPathLengthAtmM;
     out.waterToCarbonDioxide = spec.radiationRatio;
   }
-  const hTotal = h + hRadiation;
-  if (spec.gasCooling) {
-    marchThroughSegment(gasInK, wallK, hTotal * Math.PI * di * dz, massFlow * gas.specificHeat, march);
-    const cpMean = spec.gas(0.5 * (gasInK + march.gasOutK), mean).specificHeat;
-    out.gasOutK = march.gasOutK;
-    out.heatPerMetre = (massFlow * cpMean * (gasInK - march.gasOutK)) / dz;
-    out.sinkPerMetre = march.conductanceWPerK / dz;
-  } else {
-    out.gasOutK = gasInK;
-    out.heatPerMetre = hTotal * Math.PI * di * (gasInK - wallK);
-    out.sinkPerMetre = hTotal * Math.PI * di;
-  }
   out.filmCoefficient = h;
   out.radiationFilm = hRadiation;
   out.reynolds = reynolds;
   out.prandtl = gas.prandtl;
+  return gas;
+}
+
+/** Heat into each sector's inner surface, W per metre of height, and −∂/∂T of each, W/(m K). */
+export interface FlueSideOfSectors {
+  readonly heatPerMetre: Float64Array;
+  readonly sinkPerMetre: Float64Array;
+}
+
+const sectorFilm = emptyFlueSide();
+
+/**
+ * The flue side of one segment whose inner surface is cut into `n` equal sectors at wall
+ * temperatures `walls[offset + j·stride]` (j = 0…n−1): the gas stays one well-mixed stream. Each
+ * sector's film (h_j, convection and radiation, at its own wall temperature) gives UA_j = h_j π D Δz / n;
+ * the gas crosses the segment against the combined UA = Σ UA_j at the UA-weighted wall temperature
+ * T_w = Σ UA_j T_j / UA (the exact march for a well-mixed gas over walls at several temperatures with
+ * one mean gas temperature), giving T_out and Q; the mean gas temperature T_m = T_w + Q/UA sets each
+ * sector's share Q_j = UA_j (T_m − T_j), which sum to Q exactly.
+ * `out` (segment-level diagnostics: the mean film, the gas leaving) and `sectors` are filled.
+ */
+export function flueSideOfSectors(
+  spec: FlueSideSpec,
+  gasInK: number,
+  walls: Float64Array,
+  offset: number,
+  stride: number,
+  n: number,
+  massFlow: number,
+  out: FlueSideOfSegment,
+  sectors: FlueSideOfSectors,
+): FlueSideOfSegment {
+  const di = spec.innerDiameter;
+  const dz = spec.segmentLength;
+  let ua = 0;
+  let uaWall = 0;
+  let film = 0;
+  let radiationFilm = 0;
+  for (let j = 0; j < n; j++) {
+    const tj = walls[offset + j * stride]!;
+    insideFilmOfWall(spec, gasInK, tj, massFlow, sectorFilm);
+    const uaj = ((sectorFilm.filmCoefficient + sectorFilm.radiationFilm) * Math.PI * di * dz) / n;
+    sectors.sinkPerMetre[j] = uaj; // UA_j for now
+    ua += uaj;
+    uaWall += uaj * tj;
+    film += sectorFilm.filmCoefficient / n;
+    radiationFilm += sectorFilm.radiationFilm / n;
+  }
+  const wallK = ua > 0 ? uaWall / ua : walls[offset]!;
+  const gas = insideFilmOfWall(spec, gasInK, wallK, massFlow, out); // the diagnostics of the mean wall
+  let total: number; // Q, W
+  let sink: number; // −∂Q/∂T_w, W/K
+  if (spec.gasCooling) {
+    marchThroughSegment(gasInK, wallK, ua, massFlow * gas.specificHeat, march);
+    const cpMean = spec.gas(0.5 * (gasInK + march.gasOutK), mean).specificHeat;
+    out.gasOutK = march.gasOutK;
+    total = massFlow * cpMean * (gasInK - march.gasOutK);
+    sink = march.conductanceWPerK;
+  } else {
+    out.gasOutK = gasInK;
+    total = ua * (gasInK - wallK);
+    sink = ua;
+  }
+  const gasMean = ua > 0 ? wallK + total / ua : gasInK;
+  for (let j = 0; j < n; j++) {
+    const uaj = sectors.sinkPerMetre[j]!;
+    const w = ua > 0 ? uaj / ua : 1 / n;
+    sectors.heatPerMetre[j] = (uaj * (gasMean - walls[offset + j * stride]!)) / dz;
+    // −∂Q_j/∂T_j = UA_j (1 − w_j) + w_j² (−∂Q/∂T_w), w_j = UA_j/UA: its own conductance plus its share of the gas
+    sectors.sinkPerMetre[j] = (uaj * (1 - w) + w * w * sink) / dz;
+  }
+  out.heatPerMetre = total / dz;
+  out.sinkPerMetre = sink / dz;
+  out.filmCoefficient = film;
+  out.radiationFilm = radiationFilm;
   return out;
 }

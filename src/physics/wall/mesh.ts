@@ -63,6 +63,15 @@ export interface WallMesh {
   /** Materials of the capacity parts (for stored-energy integrals). */
   readonly capMaterialA: readonly Material[];
   readonly capMaterialB: readonly (Material | null)[];
+  /**
+   * Round the circumference (sector models): the radial extent of each capacity part of node i, m,
+   * and, for the two faces of an air gap, the gap's width, m (0 elsewhere) and the mean of the two
+   * face emissivities' radiation factor 1/(1/ε₁ + 1/ε₂ − 1).
+   */
+  readonly radialExtentA: Float64Array;
+  readonly radialExtentB: Float64Array;
+  readonly gapWidthAtNode: Float64Array;
+  readonly gapRadiationFactorAtNode: Float64Array;
   readonly innerRadius: number;
   readonly outerRadius: number;
 }
@@ -99,6 +108,10 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
   const capCpB: (((T: number) => number) | null)[] = [];
   const capMaterialA: Material[] = [];
   const capMaterialB: (Material | null)[] = [];
+  const radialExtentA: number[] = [];
+  const radialExtentB: number[] = [];
+  const gapWidthAtNode: number[] = [];
+  const gapRadiationFactorAtNode: number[] = [];
 
   const addNode = (r: number, name: string) => {
     radius.push(r);
@@ -109,6 +122,10 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
     capCpB.push(null);
     capMaterialA.push(null as unknown as Material);
     capMaterialB.push(null);
+    radialExtentA.push(0);
+    radialExtentB.push(0);
+    gapWidthAtNode.push(0);
+    gapRadiationFactorAtNode.push(0);
     return radius.length - 1;
   };
   const addCapacity = (node: number, material: Material, rIn: number, rOut: number) => {
@@ -117,10 +134,12 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
       capMassA[node] += mass;
       capCpA[node] = makeTableLookup(material.specificHeat);
       capMaterialA[node] = material;
+      radialExtentA[node] += rOut - rIn;
     } else {
       capMassB[node] += mass;
       capCpB[node] = makeTableLookup(material.specificHeat);
       capMaterialB[node] = material;
+      radialExtentB[node] += rOut - rIn;
     }
   };
   const addLink = (kind: number, geometry: number, k: ((T: number) => number) | null, gap: GapLink | null) => {
@@ -133,6 +152,7 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
   let r = innerRadius;
   let pendingLink: { kind: number; geometry: number; gap: GapLink | null } | null = null;
   let current = -1; // last node created
+  let pendingGapFace: { width: number; factor: number } | null = null; // the outer face of a gap awaits its node
   const interfaceName = (b: number) => `interface_${b}`;
 
   layers.forEach((layer, j) => {
@@ -148,6 +168,10 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
         gap: { innerRadius: rIn, outerRadius: rOut, innerEmissivity: prev.emissivity, outerEmissivity: next.emissivity },
       };
       layerNodes.push([current, current + 1]);
+      // its two faces: the node before it and the next node to be made
+      gapWidthAtNode[current] = layer.thickness;
+      pendingGapFace = { width: layer.thickness, factor: 1 / (1 / prev.emissivity + 1 / next.emissivity - 1) };
+      gapRadiationFactorAtNode[current] = pendingGapFace.factor;
       r = rOut;
       return;
     }
@@ -160,6 +184,11 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
     } else {
       const name = j === 0 ? 'inner_surface' : pendingLink?.kind === LINK_CONTACT ? `${interfaceName(j)}_out` : interfaceName(j);
       first = addNode(rIn, name);
+      if (pendingGapFace) {
+        gapWidthAtNode[first] = pendingGapFace.width;
+        gapRadiationFactorAtNode[first] = pendingGapFace.factor;
+        pendingGapFace = null;
+      }
       if (pendingLink) {
         addLink(pendingLink.kind, pendingLink.geometry, null, pendingLink.gap);
         pendingLink = null;
@@ -202,6 +231,10 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
     capCpB,
     capMaterialA,
     capMaterialB,
+    radialExtentA: Float64Array.from(radialExtentA),
+    radialExtentB: Float64Array.from(radialExtentB),
+    gapWidthAtNode: Float64Array.from(gapWidthAtNode),
+    gapRadiationFactorAtNode: Float64Array.from(gapRadiationFactorAtNode),
     innerRadius,
     outerRadius: r,
   };
