@@ -18,7 +18,7 @@ export function fractionBelowZero(a: number, b: number): number {
 /** Lowest value of a per-instant-per-segment array (index k · S + seg) over the evaluated instants; the first found wins a tie. */
 export function lowestMargin(ev: Evaluated, marginK: Float64Array): Located {
   const { S } = ev;
-  const lowest = locateLargest(ev, (k, seg) => -marginK[k * S + seg]!);
+  const lowest = locateLargest(ev, (k, seg) => -marginK[k * S + seg]!, -Infinity, false, 'segments');
   return { value: -lowest.value, at: lowest.at };
 }
 

@@ -16,10 +16,14 @@ export function evaluationInstants(series: TimeSeries, mode: 'cycle' | 'warmup')
   return out;
 }
 
-/** Where a figure occurs: an output instant (index into the series' times) and an axial segment (0 = bottom). */
+/**
+ * Where a figure occurs: an output instant (index into the series' times), an axial segment
+ * (0 = bottom) and, for a wall cut into sectors, the circumferential sector (absent otherwise).
+ */
 export interface Location {
   readonly instant: number;
   readonly segment: number;
+  readonly sector?: number;
 }
 
 /** A figure in SI units (K, K, Pa …) and where it occurs. */
@@ -33,26 +37,35 @@ export interface Evaluated {
   readonly series: TimeSeries;
   /** Evaluated output instants, in time order. */
   readonly ks: readonly number[];
-  /** Segments and nodes per segment. */
+  /** Segments, sectors, columns (segment × sector: the wall's node columns) and nodes per column. */
   readonly S: number;
+  readonly sectors: number;
+  readonly C: number;
   readonly N: number;
-  /** Temperature, K, of node i of segment seg at output instant k. */
-  readonly T: (k: number, seg: number, i: number) => number;
+  /** Temperature, K, of node i of column col (segment ⌊col/sectors⌋, sector col mod sectors) at output instant k. */
+  readonly T: (k: number, col: number, i: number) => number;
 }
 
 export function evaluated(series: TimeSeries, mode: 'cycle' | 'warmup'): Evaluated {
   const S = series.segments;
+  const sectors = series.sectors;
+  const C = S * sectors;
   const N = series.nodes;
   const temperatureK = series.temperatureK;
-  return { series, ks: evaluationInstants(series, mode), S, N, T: (k, seg, i) => temperatureK[(k * S + seg) * N + i]! };
+  return { series, ks: evaluationInstants(series, mode), S, sectors, C, N, T: (k, col, i) => temperatureK[(k * C + col) * N + i]! };
 }
 
-/** Lowest and highest temperature, K, of node i of segment seg over the evaluated instants. */
-export function rangeAt(ev: Evaluated, seg: number, i: number): { lo: number; hi: number } {
+/** The location of column `col` at instant k: its segment and (with sectors) its sector. */
+export function columnLocation(ev: Evaluated, k: number, col: number): Location {
+  return ev.sectors === 1 ? { instant: k, segment: col } : { instant: k, segment: Math.floor(col / ev.sectors), sector: col % ev.sectors };
+}
+
+/** Lowest and highest temperature, K, of node i of column col over the evaluated instants. */
+export function rangeAt(ev: Evaluated, col: number, i: number): { lo: number; hi: number } {
   let lo = Infinity;
   let hi = -Infinity;
   for (const k of ev.ks) {
-    const v = ev.T(k, seg, i);
+    const v = ev.T(k, col, i);
     lo = Math.min(lo, v);
     hi = Math.max(hi, v);
   }
@@ -72,26 +85,30 @@ export function nodeRange(a: number, b: number): number[] {
 }
 
 /**
- * Largest `score(k, seg)` over the evaluated instants and all segments, with where it occurs. The
- * search runs instant by instant (or, with `heightFirst`, height by height); the first location
- * found wins a tie, and scores not above `floor` are never chosen (the result is then `floor` at
- * the first instant of the bottom segment).
+ * Largest `score(k, col)` over the evaluated instants and all columns of the wall (with `over:
+ * 'segments'`, all segments: for per-segment channels), with where it occurs. The search runs
+ * instant by instant (or, with `heightFirst`, column by column); the first location found wins a
+ * tie, and scores not above `floor` are never chosen (the result is then `floor` at the first
+ * instant of the bottom column).
  */
-export function locateLargest(ev: Evaluated, score: (k: number, seg: number) => number, floor = -Infinity, heightFirst = false): Located {
-  const { ks, S } = ev;
+export function locateLargest(ev: Evaluated, score: (k: number, col: number) => number, floor = -Infinity, heightFirst = false, over: 'columns' | 'segments' = 'columns'): Located {
+  const { ks } = ev;
+  const count = over === 'columns' ? ev.C : ev.S;
   let best = floor;
-  let at: Location = { instant: ks[0]!, segment: 0 };
-  const visit = (k: number, seg: number) => {
-    const v = score(k, seg);
+  let bestK = ks[0]!;
+  let bestCol = 0;
+  const visit = (k: number, col: number) => {
+    const v = score(k, col);
     if (v > best) {
       best = v;
-      at = { instant: k, segment: seg };
+      bestK = k;
+      bestCol = col;
     }
   };
   if (heightFirst) {
-    for (let seg = 0; seg < S; seg++) for (const k of ks) visit(k, seg);
+    for (let col = 0; col < count; col++) for (const k of ks) visit(k, col);
   } else {
-    for (const k of ks) for (let seg = 0; seg < S; seg++) visit(k, seg);
+    for (const k of ks) for (let col = 0; col < count; col++) visit(k, col);
   }
-  return { value: best, at };
+  return { value: best, at: over === 'columns' ? columnLocation(ev, bestK, bestCol) : { instant: bestK, segment: bestCol } };
 }

@@ -66,7 +66,7 @@ export interface PositionSwingAt {
 
 /** Range and largest swing (max − min over the period at one height) of every surface and interface, inside → outside. */
 export function positionRanges(ev: Evaluated): { positions: PositionRange[]; swingAt: PositionSwingAt[] } {
-  const { series: s, S } = ev;
+  const { series: s, C } = ev;
   const positions: PositionRange[] = [];
   const swingAt: PositionSwingAt[] = [];
   s.nodeLabel.forEach((label, i) => {
@@ -75,13 +75,13 @@ export function positionRanges(ev: Evaluated): { positions: PositionRange[]; swi
     let max = -Infinity;
     let swing = -Infinity;
     let swingSeg = 0;
-    for (let seg = 0; seg < S; seg++) {
-      const { lo, hi } = rangeAt(ev, seg, i);
+    for (let col = 0; col < C; col++) {
+      const { lo, hi } = rangeAt(ev, col, i);
       min = Math.min(min, lo);
       max = Math.max(max, hi);
       if (hi - lo > swing) {
         swing = hi - lo;
-        swingSeg = seg;
+        swingSeg = Math.floor(col / ev.sectors);
       }
     }
     positions.push({ position: label, radius_m: round(s.nodeRadius[i]!, 4), min_c: round(c(min)), max_c: round(c(max)), swing_k: round(swing), swing_height_m: round(s.heightM[swingSeg]!, 2) });

@@ -19,9 +19,9 @@ export function layerRange(ev: Evaluated, layer: SeriesLayer): { minK: number; m
   let min = Infinity;
   let max = -Infinity;
   let swing = 0;
-  for (let seg = 0; seg < ev.S; seg++)
+  for (let col = 0; col < ev.C; col++)
     for (const i of nodes) {
-      const { lo, hi } = rangeAt(ev, seg, i);
+      const { lo, hi } = rangeAt(ev, col, i);
       min = Math.min(min, lo);
       max = Math.max(max, hi);
       swing = Math.max(swing, hi - lo);

@@ -44,11 +44,17 @@ const MIN_SHELL_RISE_K = 0.1;
  * time axis); the firing start is stated as the first output instant.
  */
 export function warmupTimes(ev: Evaluated, firingStartT: number, limits: LimitsInput): NonNullable<Summary['warmup']> {
-  const { series: s, ks, S, N, T } = ev;
+  const { series: s, ks, S, N, T, sectors } = ev;
   const times = Array.from(s.t, (t) => t - firingStartT);
+  // with sectors: the coldest inner surface at the height (the dew points) and the hottest shell (the touch limit)
+  const acrossSectors = (k: number, seg: number, i: number, pick: (a: number, b: number) => number) => {
+    let v = T(k, seg * sectors, i);
+    for (let j = 1; j < sectors; j++) v = pick(v, T(k, seg * sectors + j, i));
+    return v;
+  };
   const atHeight = (seg: number): WarmupAtHeight => {
-    const inner = ks.map((k) => T(k, seg, 0));
-    const shell = ks.map((k) => T(k, seg, N - 1));
+    const inner = ks.map((k) => acrossSectors(k, seg, 0, Math.min));
+    const shell = ks.map((k) => acrossSectors(k, seg, N - 1, Math.max));
     const tt = ks.map((k) => times[k]!);
     const min = (x: number | null) => (x === null ? null : round(x / 60, 1));
     const shellRise = shell[shell.length - 1]! - shell[0]!;
