@@ -11,6 +11,8 @@
  * 3. Where the time goes: the same day with the outside correlations and sun switched off, and
  *    with the inside correlation switched off; the differences are their costs.
  * 4. Charts: the time to render every chart of the demo.
+ * 5. Start-up of the compiled command (bench/startup.ts).
+ * 6. Memory: peak memory and time of a 365-day run of the demo (bench/memory.ts).
  *
  * It runs the compiled package (dist/, built by `npm run bench` first), as users do: the
  * development loader adds overhead of its own to every module access.
@@ -20,6 +22,7 @@ import { simulate } from '../dist/model/simulate.js';
 import type { ModelInputs } from '../dist/model/inputs.js';
 import type { RunResult } from '../dist/model/timeseries.js';
 import { benchStartup } from './startup.ts';
+import { benchMemory } from './memory.ts';
 
 /** Runs before timing: V8 needs about this many one-day runs before its optimised code settles. */
 const WARM_UP_RUNS = 10;
@@ -135,3 +138,5 @@ try {
   console.log(`4. charts: not measured (${(e as Error).message})`);
 }
 benchStartup();
+console.log('');
+benchMemory();

@@ -1,16 +1,22 @@
 /**
  * stackday as a library: everything the command does, as typed calls.
  *
- *   const { summary, result } = runScenario(scenarioObject);          // compute only
- *   const files = writeRun(run, 'out/my-stack', { charts: true });    // write the same files as the CLI
+ *   const run = runScenario(scenarioObject);                          // compute only
+ *   const { run, files } = await runToFolder('my.yaml', 'out/my-stack'); // compute and write, as the CLI does
+ *   const files = await writeRun(run, 'out/my-stack');                // write a computed run's files from memory
  *
  * The chain is one-way: scenario → model inputs → mesh → integrator → time series → metrics → reports.
  */
 import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { validateScenario, loadScenarioFile, type LoadedScenario } from './input/scenario/load.ts';
 import { simulate, type SimulateOptions } from './model/simulate.ts';
-import { summariseRun, type SummaryLocations } from './analysis/metrics/index.ts';
-import { summaryJson, timeseriesCsv, segmentsCsv, writeArtefactsAtomically, type Artefact } from './output/write.ts';
+import type { InstantSink } from './model/sinks.ts';
+import { DailyExtremes, summariseRun, type SummaryLocations } from './analysis/metrics/index.ts';
+import { summaryJson, writeArtefacts, writeArtefactsAtomically, type Artefact } from './output/write.ts';
+import { DEFAULT_SERIES_FILE, seriesFileArtefacts, segmentsCsv, sizeNotice, timeseriesCsv } from './output/csv.ts';
+import { StagedFolder, pauseForTest } from './output/folder.ts';
+import { BufferedFileWriter } from './output/textOut.ts';
 import type { ModelInputs } from './model/inputs.ts';
 import type { RunResult } from './model/timeseries.ts';
 import type { Summary } from './analysis/summary.ts';
@@ -25,6 +31,8 @@ export { summarise, summariseRun } from './analysis/metrics/index.ts';
 export { thermalStressIndicator } from './physics/wall/stress.ts';
 export { resultSheet } from './output/console.ts';
 export { MATERIALS, findMaterial, materialNames } from './physics/materials/index.ts';
+export { OutputFolderError } from './output/folder.ts';
+export type { InstantSink, InstantView } from './model/sinks.ts';
 export type { ModelInputs } from './model/inputs.ts';
 export type { RunResult, TimeSeries, EnergyAccount } from './model/timeseries.ts';
 export type { Summary, Verdict } from './analysis/summary.ts';
@@ -42,27 +50,35 @@ export interface Run {
   readonly description: string | null;
 }
 
-/** Run a scenario: a file path, a scenario object (as parsed from YAML/JSON), or validated model inputs. */
-export function runScenario(scenario: string | Record<string, unknown> | LoadedScenario | ModelInputs, options: SimulateOptions = {}): Run {
-  let inputs: ModelInputs;
-  let description: string | null = null;
+/** Validated inputs and description of a scenario given as a file path, a scenario object, a loaded scenario or model inputs. */
+function resolveScenario(scenario: string | Record<string, unknown> | LoadedScenario | ModelInputs): { inputs: ModelInputs; description: string | null } {
   if (typeof scenario === 'string') {
     const loaded = loadScenarioFile(scenario);
-    inputs = loaded.inputs;
-    description = loaded.scenario.description ?? null;
-  } else if ('inputs' in scenario && 'scenario' in scenario) {
-    inputs = (scenario as LoadedScenario).inputs;
-    description = (scenario as LoadedScenario).scenario.description ?? null;
-  } else if (Array.isArray((scenario as { layers?: unknown }).layers)) {
-    // validated model inputs carry the layers at the top level (a scenario file nests them under stack)
-    inputs = scenario as unknown as ModelInputs;
-  } else {
-    const loaded = validateScenario(scenario);
-    inputs = loaded.inputs;
-    description = loaded.scenario.description ?? null;
+    return { inputs: loaded.inputs, description: loaded.scenario.description ?? null };
   }
-  const result = simulate(inputs, options);
-  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description });
+  if ('inputs' in scenario && 'scenario' in scenario) {
+    const loaded = scenario as LoadedScenario;
+    return { inputs: loaded.inputs, description: loaded.scenario.description ?? null };
+  }
+  // validated model inputs carry the layers at the top level (a scenario file nests them under stack)
+  if (Array.isArray((scenario as { layers?: unknown }).layers)) return { inputs: scenario as unknown as ModelInputs, description: null };
+  const loaded = validateScenario(scenario);
+  return { inputs: loaded.inputs, description: loaded.scenario.description ?? null };
+}
+
+/**
+ * Run a scenario: a file path, a scenario object (as parsed from YAML/JSON), or validated model
+ * inputs. `options.sinks` receive every reported instant as it is computed; the result's series
+ * holds the days the summary covers (every day with `options.retainAll`).
+ */
+export function runScenario(scenario: string | Record<string, unknown> | LoadedScenario | ModelInputs, options: SimulateOptions = {}): Run {
+  return runResolved(resolveScenario(scenario), options);
+}
+
+function runResolved({ inputs, description }: { inputs: ModelInputs; description: string | null }, options: SimulateOptions): Run {
+  const daily = new DailyExtremes();
+  const result = simulate(inputs, { ...options, sinks: [daily, ...(options.sinks ?? [])] });
+  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description, daily });
   return { inputs, result, summary, locations, description };
 }
 
@@ -76,13 +92,12 @@ export interface WriteOptions {
   readonly chartHeightsM?: readonly number[];
 }
 
-/** The files of a run, in memory. */
-export async function runArtefacts(run: Run, options: WriteOptions = {}): Promise<Artefact[]> {
-  const artefacts: Artefact[] = [
-    { fileName: 'summary.json', content: summaryJson(run.summary) },
-    { fileName: 'timeseries.csv', content: timeseriesCsv(run.result.series) },
-    { fileName: 'segments.csv', content: segmentsCsv(run.result.series) },
-  ];
+/**
+ * The files made once a run is complete: summary.json, then (unless `charts` is false) the PNG
+ * charts and report.html. A new file of this kind is one more entry here.
+ */
+export async function finalArtefacts(run: Run, options: WriteOptions = {}): Promise<Artefact[]> {
+  const artefacts: Artefact[] = [{ fileName: 'summary.json', content: summaryJson(run.summary) }];
   if (options.charts !== false) {
     const { renderAllCharts } = await import('./output/charts/index.ts');
     const { renderReportHtml } = await import('./output/report.ts');
@@ -98,7 +113,65 @@ export async function runArtefacts(run: Run, options: WriteOptions = {}): Promis
   return artefacts;
 }
 
-/** Write the files of a run into `dir` atomically; returns the paths written. */
+/**
+ * The files of a run, in memory: the per-instant CSV files made from the run's series (which holds
+ * the days the summary covers, or every day of a run made with `retainAll`) and the final files.
+ */
+export async function runArtefacts(run: Run, options: WriteOptions = {}): Promise<Artefact[]> {
+  const output = run.inputs.output ?? { timeseries: DEFAULT_SERIES_FILE, segments: DEFAULT_SERIES_FILE };
+  const [summary, ...rest] = await finalArtefacts(run, options);
+  const csv: Artefact[] = [];
+  if (output.timeseries.content !== 'off') csv.push({ fileName: 'timeseries.csv', content: timeseriesCsv(run.result.series, output.timeseries) });
+  if (output.segments.content !== 'off') csv.push({ fileName: 'segments.csv', content: segmentsCsv(run.result.series, output.segments) });
+  return [summary!, ...csv, ...rest];
+}
+
+/** Write the files of a computed run into `dir`, replacing it whole; returns the paths written. */
 export async function writeRun(run: Run, dir: string, options: WriteOptions = {}): Promise<string[]> {
   return writeArtefactsAtomically(dir, await runArtefacts(run, options));
+}
+
+export interface RunToFolderOptions extends WriteOptions {
+  /** Called now and then with the fraction of the run done (0–1). */
+  readonly onProgress?: (fraction: number) => void;
+  /** Told, before the run is computed, when its files will be large (a line for the user; never written to a file). */
+  readonly onNotice?: (message: string) => void;
+}
+
+/**
+ * Run a scenario and write its files into `dir` as the command line does: the per-instant files are
+ * written while the run goes (memory stays flat however many days it runs), the others when it is
+ * complete, all into a fresh folder beside `dir` that then replaces `dir` whole. A bad scenario
+ * throws before anything is written; a failed run leaves `dir` as it was.
+ */
+export async function runToFolder(scenario: string | Record<string, unknown> | LoadedScenario | ModelInputs, dir: string, options: RunToFolderOptions = {}): Promise<{ run: Run; files: string[] }> {
+  const resolved = resolveScenario(scenario);
+  const folder = StagedFolder.open(dir);
+  const writers: BufferedFileWriter[] = [];
+  try {
+    const streamed = seriesFileArtefacts(resolved.inputs);
+    const sinks: InstantSink[] = streamed.map((a) => {
+      const writer = new BufferedFileWriter(join(folder.path, a.fileName));
+      writers.push(writer);
+      return a.sink(writer);
+    });
+    const notice: InstantSink = {
+      start(layout) {
+        const message = sizeNotice(streamed, layout);
+        if (message !== null) options.onNotice?.(message);
+      },
+      instant() {},
+    };
+    const run = runResolved(resolved, { onProgress: options.onProgress, sinks: [notice, ...sinks] });
+    for (const w of writers) w.close();
+    const files = streamed.map((a) => join(dir, a.fileName));
+    pauseForTest('between-files');
+    files.push(...writeArtefacts(folder, await finalArtefacts(run, options)));
+    folder.commit();
+    return { run, files };
+  } catch (e) {
+    for (const w of writers) w.abandon();
+    folder.abandon();
+    throw e;
+  }
 }

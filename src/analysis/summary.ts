@@ -75,6 +75,29 @@ export interface WarmupAtHeight {
   readonly minutes_to_shell_touch: number | null;
 }
 
+/** Figures of one simulated day (closed interval from its start to its end), every height. */
+export interface DayFigures {
+  /** Day of the run, from 1. */
+  readonly day: number;
+  /** Local date at the middle of the day, YYYY-MM-DD. */
+  readonly date: string;
+  /** Range of the outer surface. */
+  readonly shell_min_c: number;
+  readonly shell_max_c: number;
+  /** Range of the flue-side layer, every node. */
+  readonly lining_min_c: number;
+  readonly lining_max_c: number;
+  readonly inner_surface_min_c: number;
+  readonly inner_surface_max_c: number;
+  readonly lowest_water_dew_margin_k: number;
+  /** Null when the gas has no acid dew point. */
+  readonly lowest_acid_dew_margin_k: number | null;
+  /** Heat lost to the outside over the day, net of sun, kWh (null when the day's account is not known). */
+  readonly heat_loss_kwh: number | null;
+  /** Heat from the gas into the wall over the day, kWh. */
+  readonly gas_to_wall_kwh: number | null;
+}
+
 export interface Summary {
   readonly tool: { readonly name: 'stackday'; readonly version: string };
   readonly scenario: { readonly name: string; readonly description: string | null; readonly site: string; readonly first_day: string; readonly time_zone: string };
@@ -96,7 +119,6 @@ export interface Summary {
     readonly jacobian_evaluations: number;
     readonly newton_iterations: number;
     readonly newton_failures: number;
-    readonly compute_ms: number;
     readonly output_interval_min: number;
     readonly segments: number;
     readonly nodes_per_segment: number;
@@ -142,6 +164,8 @@ export interface Summary {
     readonly top: WarmupAtHeight;
     readonly by_height: readonly WarmupAtHeight[];
   } | null;
+  /** Figures of every simulated day (a periodic study: its settled day only), first to last. */
+  readonly daily: readonly DayFigures[];
   /** What the run assumed (wind conversion, pressures, gas radiation, clear sky) and every accepted extrapolation of a correlation, once each. */
   readonly assumptions: readonly string[];
   /** Problems the reader must see: correlations beyond their range without justification (how far, where), an unreached periodic state, a poor energy balance. */

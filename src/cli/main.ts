@@ -3,7 +3,8 @@
  * The `stackday` command: a thin layer over the library (no physics here).
  *
  * Exit codes: 0 the run completed (whatever the verdicts); 2 bad input (scenario, weather file,
- * options) or a run that could not be computed — nothing is written; 3 the run completed, a limit
+ * options, an output folder holding files stackday did not write) or a run that could not be
+ * computed — nothing is written (earlier results stay as they were); 3 the run completed, a limit
  * failed and --strict was given.
  */
 import { Command, CommanderError, Option } from 'commander';
@@ -66,7 +67,7 @@ function overridesFrom(raw: unknown, opts: RunOptions, mode: 'cycle' | 'warmup' 
 }
 
 async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmup' | null): Promise<number> {
-  const [{ readScenarioFile, validateModelInputs }, { runScenario, writeRun }, { resultSheet }, { SingleBar, Presets }] = await Promise.all([
+  const [{ readScenarioFile, validateModelInputs }, { runToFolder }, { resultSheet }, { SingleBar, Presets }] = await Promise.all([
     import('../input/scenario/load.ts'),
     import('../index.ts'),
     import('../output/console.ts'),
@@ -78,26 +79,37 @@ async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmu
   const loaded = validateModelInputs(raw, { baseDir: dirname(resolve(file)), file, overrides: overridesFrom(raw, opts, mode) });
   const outDir = resolve(opts.out ?? join('out', loaded.inputs.name));
   const showProgress = !opts.quiet && process.stderr.isTTY;
+  // the bar starts with the first progress report, after any notice about the size of the files
   const bar = showProgress ? new SingleBar({ format: 'simulating |{bar}| {percentage}% ', stream: process.stderr, hideCursor: true }, Presets.shades_classic) : null;
-  bar?.start(100, 0);
+  let barStarted = false;
   let lastPct = -1;
+  const started = performance.now();
   let run;
   try {
-    run = runScenario(loaded, {
+    ({ run } = await runToFolder(loaded, outDir, {
+      charts: opts.charts,
+      chartWidth: chartSize.width,
+      chartHeight: chartSize.height,
+      chartHeightsM: chartHeights,
+      onNotice: (message) => {
+        if (!opts.quiet) process.stderr.write(`stackday: ${message}\n`);
+      },
       onProgress: (f) => {
         const pct = Math.floor(f * 100);
-        if (pct !== lastPct) {
-          lastPct = pct;
-          bar?.update(pct);
-        }
+        if (pct === lastPct) return;
+        lastPct = pct;
+        if (bar && !barStarted) {
+          bar.start(100, pct);
+          barStarted = true;
+        } else bar?.update(pct);
       },
-    });
+    }));
   } finally {
-    bar?.stop();
+    if (barStarted) bar?.stop();
   }
-  await writeRun(run, outDir, { charts: opts.charts, chartWidth: chartSize.width, chartHeight: chartSize.height, chartHeightsM: chartHeights });
+  const seconds = (performance.now() - started) / 1000;
   if (opts.json) process.stdout.write(`${JSON.stringify(run.summary, null, 2)}\n`);
-  else if (!opts.quiet) process.stdout.write(`${resultSheet(run.summary, outDir).join('\n')}\n`);
+  else if (!opts.quiet) process.stdout.write(`${resultSheet(run.summary, outDir, { seconds }).join('\n')}\n`);
   if (opts.strict && !run.summary.all_limits_pass) {
     const failed = run.summary.verdicts.filter((v) => v.status === 'fail').map((v) => v.limit);
     process.stderr.write(`stackday: --strict: limit(s) failed: ${failed.join(', ')}\n`);
@@ -221,6 +233,11 @@ export async function main(argv: readonly string[]): Promise<number> {
     }
     if (e instanceof BadInput) {
       process.stderr.write(`stackday: ${e.message}\n`);
+      return EXIT_BAD_INPUT;
+    }
+    const { OutputFolderError } = await import('../output/folder.ts');
+    if (e instanceof OutputFolderError) {
+      process.stderr.write(`stackday: ${e.message}\nNothing was written.\n`);
       return EXIT_BAD_INPUT;
     }
     const { SimulationError } = await import('../model/simulate.ts');

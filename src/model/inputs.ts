@@ -146,6 +146,24 @@ export interface LimitsInput {
   readonly waterDewMarginK?: number;
 }
 
+/**
+ * What a run writes of one per-instant file (timeseries.csv, segments.csv); read by the output
+ * layer, the model ignores it. `all`: every output instant of the run; `last-day`: the last
+ * simulated day; `daily-extremes`: per day, the lowest and highest value of every column;
+ * `off`: no file.
+ */
+export interface SeriesFileInput {
+  readonly content: 'all' | 'last-day' | 'daily-extremes' | 'off';
+  /** Only instants a whole multiple of this after the run's first, s (with all and last-day); undefined: every output instant. */
+  readonly intervalS?: number;
+}
+
+/** The run's per-instant files. */
+export interface OutputInput {
+  readonly timeseries: SeriesFileInput;
+  readonly segments: SeriesFileInput;
+}
+
 export interface ModelInputs {
   readonly name: string;
   readonly site: SiteInput;
@@ -157,4 +175,6 @@ export interface ModelInputs {
   readonly flue: FlueInput;
   readonly run: RunInput;
   readonly limits: LimitsInput;
+  /** What the run's per-instant files hold (default: every instant in both). */
+  readonly output?: OutputInput;
 }

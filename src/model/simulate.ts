@@ -1,9 +1,16 @@
 /**
- * Run the wall model: validated inputs → assembled model → integrator, day by day → time series,
- * energy account and range checks. Nothing here reads files or knows the scenario format.
+ * Run the wall model: validated inputs → assembled model → integrator, day by day → reported
+ * instants (to the run's sinks as they are computed, and kept in memory as far as the summary and
+ * charts need them), energy account and range checks. Nothing here reads or writes files or knows
+ * the scenario format.
+ *
+ * Memory stays flat in the number of days: the result's series holds the last day of a cycle study
+ * (the day its figures cover) and, of a warm-up study, the whole run up to WARMUP_SERIES_BUDGET_BYTES
+ * (its first days, when the run is longer); sinks see every instant. `retainAll` keeps every instant
+ * instead (memory then grows with the run).
  */
 import type { ModelInputs } from './inputs.ts';
-import type { RunResult } from './timeseries.ts';
+import type { EnergyAccount, RunResult } from './timeseries.ts';
 import { assembleModel, type AssembledModel } from './assemble.ts';
 import { makeSegmentDiagnostics, AUX_SIZE } from './system.ts';
 import { INTEGRATORS } from '../solver/index.ts';
@@ -14,12 +21,32 @@ import { SECONDS_PER_DAY } from '../physics/constants.ts';
 import { Recorder } from './recorder.ts';
 import { energyAccount } from './energy.ts';
 import { SimulationError } from './errors.ts';
+import type { InstantSink, InstantView } from './sinks.ts';
+import { SERIES_INSTANT_CHANNELS, SERIES_SEGMENT_CHANNELS } from './timeseries.ts';
 
 export { SimulationError } from './errors.ts';
 
 export interface SimulateOptions {
   /** Called now and then with the fraction of the run done (0–1). */
   readonly onProgress?: (fraction: number) => void;
+  /** Receive every reported instant as it is computed (files written as the run goes, running figures). */
+  readonly sinks?: readonly InstantSink[];
+  /** Keep every reported instant in the result's series, not only those the summary needs (memory grows with the run). */
+  readonly retainAll?: boolean;
+  /** Memory, bytes, a warm-up study's series may take (default WARMUP_SERIES_BUDGET_BYTES). */
+  readonly warmupSeriesBudgetBytes?: number;
+}
+
+/**
+ * Most memory, bytes, that the series of a warm-up study may take: the study keeps its whole run
+ * for the figures (times to reach the dew points, from firing start) up to this, and its first
+ * days beyond it (about 230 days of the demo at a 10-minute output interval, 23 days at 1 minute).
+ */
+export const WARMUP_SERIES_BUDGET_BYTES = 128 * 1024 * 1024;
+
+/** Approximate memory of one kept instant, bytes: its numbers and its ISO time string. */
+function bytesPerInstant(segments: number, nodes: number): number {
+  return 8 * (segments * (nodes + SERIES_SEGMENT_CHANNELS.length) + SERIES_INSTANT_CHANNELS.length + 4) + 96;
 }
 
 /** Build the mesh, the drivers and the ODE system for the inputs (see assemble.ts). */
@@ -98,14 +125,25 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   let y = initialState(model, t0);
   const initialStateMs = performance.now() - initialStarted;
 
-  // ---- recording ----
+  // ---- reporting: every instant to the sinks; the series keeps the days the figures need ----
   const rec = new Recorder(model);
+  const sinks = options.sinks ?? [];
+  for (const sink of sinks) sink.start?.(rec.layout);
   const diag = makeSegmentDiagnostics(geometry.segments, system.sectors);
-  const record = (t: number, state: Float64Array, dayNumber: number) => {
+  const keepDay = retentionRule(run, totalDays, geometry.segments, mesh.nodeCount * system.sectors, options.retainAll === true, options.warmupSeriesBudgetBytes ?? WARMUP_SERIES_BUDGET_BYTES);
+  let firstKeptDay = Number.POSITIVE_INFINITY;
+  let lastKeptDay = -1;
+  const record = (t: number, state: Float64Array, dayNumber: number, dayEnd: boolean) => {
     system.boundaries(t, state, diag);
     // a repeated first day is reported on that day's clock
     const tShown = ctx.repeatFirstDay ? t - dayNumber * SECONDS_PER_DAY : t;
-    rec.push(tShown, ctx.repeatFirstDay ? 0 : clock.dayIndex(t - t0), state, diag, system.driversAt(t));
+    const view = rec.observe(tShown, dayNumber, dayEnd, state, diag, system.driversAt(t));
+    for (const sink of sinks) sink.instant(view);
+    if (keepDay(view)) {
+      rec.keep(view, ctx.repeatFirstDay ? 0 : clock.dayIndex(t - t0));
+      firstKeptDay = Math.min(firstKeptDay, dayEnd ? dayNumber + 1 : dayNumber);
+      lastKeptDay = Math.max(lastKeptDay, dayNumber);
+    }
   };
 
   const auxRun = new Float64Array(AUX_SIZE);
@@ -116,16 +154,18 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   let lastStep: number | undefined;
   let periodic: RunResult['periodic'] = null;
   const changeByDay: number[] = [];
+  const energyByDay: EnergyAccount[] = [];
   let previousDay: { t: number[]; states: Float64Array[] } | null = null;
   let daysDone = 0;
   // a fixed number of days reports every day as it is computed; a periodic study reports only its
   // settled day, recorded (with the boundary diagnostics) once it is known
-  const keepAllDays = run.length.kind === 'days';
+  const reportAsComputed = run.length.kind === 'days';
 
-  if (keepAllDays) record(t0, y, 0);
+  if (reportAsComputed) record(t0, y, 0, false);
   for (let d = 0; d < totalDays; d++) {
     const { stops, outputs } = dayPlan(model, t0, d);
     const dayStart = t0 + d * SECONDS_PER_DAY;
+    const dayEnd = dayStart + SECONDS_PER_DAY;
     yDayStart = y.slice();
     auxDayStart = auxRun.slice();
     const day = { t: [dayStart], states: [y.slice()] };
@@ -141,7 +181,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
         {
           instants: outputs,
           onOutput: (t, state) => {
-            if (keepAllDays) record(t, state, d);
+            if (reportAsComputed) record(t, state, d, Math.abs(t - dayEnd) <= 1e-6);
             else {
               day.t.push(t);
               day.states.push(state.slice());
@@ -158,16 +198,21 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     y = result.y.slice();
     lastStep = result.lastStep;
     for (let i = 0; i < AUX_SIZE; i++) auxRun[i] += result.auxIntegral[i]!;
+    energyByDay.push(energyAccount(mesh, geometry, result.auxIntegral, yDayStart, y, SECONDS_PER_DAY));
     addStats(stats, result.stats);
     daysDone = d + 1;
-    if (!keepAllDays) {
+    if (!reportAsComputed) {
       const change = previousDay ? largestDailyChange(day.states, previousDay.states) : Number.POSITIVE_INFINITY;
       if (previousDay) changeByDay.push(change);
       previousDay = day;
       if (run.length.kind === 'until-periodic' && change < run.length.toleranceK) break;
     }
   }
-  if (!keepAllDays && previousDay) previousDay.t.forEach((t, k) => record(t, previousDay!.states[k]!, daysDone - 1));
+  if (!reportAsComputed && previousDay) {
+    const settled = previousDay;
+    settled.t.forEach((t, k) => record(t, settled.states[k]!, daysDone - 1, k === settled.t.length - 1));
+  }
+  for (const sink of sinks) sink.finish?.();
   if (run.length.kind === 'until-periodic') {
     const last = changeByDay.length ? changeByDay[changeByDay.length - 1]! : Number.POSITIVE_INFINITY;
     periodic = {
@@ -183,9 +228,11 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   const energyDay = energyAccount(mesh, geometry, dayAux, yDayStart, y, SECONDS_PER_DAY);
 
   const series = rec.finish();
+  const keptDays = lastKeptDay >= firstKeptDay ? lastKeptDay - firstKeptDay + 1 : 0;
   return {
     series,
-    energy: { run: energyRun, lastDay: energyDay },
+    retained: { firstDay: Number.isFinite(firstKeptDay) ? firstKeptDay : 0, days: keptDays, truncated: run.mode === 'warmup' && keptDays < daysDone },
+    energy: { run: energyRun, lastDay: energyDay, byDay: energyByDay },
     daysSimulated: daysDone,
     periodic,
     firingStartT: run.mode === 'warmup' ? t0 : null,
@@ -193,6 +240,22 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     warnings: rec.ranges.warnings((p) => `${p.heightM.toFixed(1)} m, ${clock.isoLocal(p.t)}`),
     assumptions: rec.ranges.assumptions(),
   };
+}
+
+/**
+ * Which observed instants the series keeps: all of them (`retainAll`, or a periodic study, which
+ * reports only its settled day); the last day of a fixed number of days of cycling, with the instant
+ * that opens it; a warm-up study's first days, as many as its budget holds (at least one).
+ */
+function retentionRule(run: ModelInputs['run'], totalDays: number, segments: number, nodes: number, retainAll: boolean, warmupBudgetBytes: number): (view: InstantView) => boolean {
+  if (retainAll || run.length.kind === 'until-periodic') return () => true;
+  if (run.mode === 'warmup') {
+    const instantsPerDay = Math.ceil(SECONDS_PER_DAY / run.outputInterval) + 8; // + schedule corners
+    const budgetDays = Math.max(1, Math.floor(warmupBudgetBytes / (instantsPerDay * bytesPerInstant(segments, nodes))));
+    return (v) => v.runDay < budgetDays;
+  }
+  const lastDay = totalDays - 1;
+  return (v) => v.runDay >= lastDay || (v.dayEnd && v.runDay === lastDay - 1);
 }
 
 /** Initial wall state: uniform at air temperature (cold), or steady at the start or daily-mean conditions. */

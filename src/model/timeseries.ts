@@ -45,13 +45,8 @@ export const SERIES_INSTANT_CHANNELS = [
 ] as const;
 export type SeriesInstantChannel = (typeof SERIES_INSTANT_CHANNELS)[number];
 
-export interface TimeSeries {
-  /** Run time of each output instant, s. */
-  readonly t: Float64Array;
-  /** ISO local time of each output instant. */
-  readonly isoLocal: readonly string[];
-  /** Day index (0-based, counted from the first simulated day) of each output instant. */
-  readonly day: Int32Array;
+/** What every instant of a run shares: the mesh, the heights, the labels and the dew points. */
+export interface SeriesLayout {
   readonly segments: number;
   /** Circumferential sectors: temperatures are then [((k · segments + s) · sectors + j) · nodes + i] (1: as above). */
   readonly sectors: number;
@@ -62,14 +57,25 @@ export interface TimeSeries {
   readonly nodeLabel: readonly string[];
   /** Labels and node ranges of the layers, inside → outside. */
   readonly layers: readonly { readonly label: string; readonly material: string; readonly kind: 'solid' | 'gap'; readonly firstNode: number; readonly lastNode: number; readonly thickness: number }[];
+  readonly waterDewPointK: number;
+  /** Null when the gas carries no SO₃. */
+  readonly acidDewPointK: number | null;
+}
+
+export interface TimeSeries extends SeriesLayout {
+  /** Run time of each output instant, s. */
+  readonly t: Float64Array;
+  /** ISO local time of each output instant. */
+  readonly isoLocal: readonly string[];
+  /** Day index (0-based, counted from the first simulated day) of each output instant. */
+  readonly day: Int32Array;
+  /** Day of the run (0-based) each output instant closes or lies in; the instant at a day's end belongs to that day. */
+  readonly runDay: Int32Array;
   readonly temperatureK: Float64Array;
   /** Per-segment channels, [k · segments + s]. */
   readonly segment: Readonly<Record<SeriesSegmentChannel, Float64Array>>;
   /** Per-instant channels, [k]; `firing` is 1 while the burner fires. */
   readonly instant: Readonly<Record<SeriesInstantChannel, Float64Array>> & { readonly firing: Uint8Array };
-  readonly waterDewPointK: number;
-  /** Null when the gas carries no SO₃. */
-  readonly acidDewPointK: number | null;
 }
 
 export interface EnergyAccount {
@@ -89,16 +95,32 @@ export interface EnergyAccount {
   readonly periodS: number;
 }
 
+/**
+ * Which run days a result's series holds: the days the summary and the charts need (the last day of
+ * a cycle study; the whole run, up to a memory budget, of a warm-up study), or every day when the
+ * run was asked to keep them all. Every instant reaches the run's sinks either way.
+ */
+export interface RetainedDays {
+  /** First run day held (0-based). */
+  readonly firstDay: number;
+  /** Number of run days held. */
+  readonly days: number;
+  /** True when a warm-up study held fewer days than it simulated (its memory budget ran out). */
+  readonly truncated: boolean;
+}
+
 export interface RunResult {
   readonly series: TimeSeries;
-  /** Energy over the whole run and over the last day. */
-  readonly energy: { readonly run: EnergyAccount; readonly lastDay: EnergyAccount };
+  /** The run days `series` holds. */
+  readonly retained: RetainedDays;
+  /** Energy over the whole run, over the last day, and over each simulated day in turn. */
+  readonly energy: { readonly run: EnergyAccount; readonly lastDay: EnergyAccount; readonly byDay: readonly EnergyAccount[] };
   readonly daysSimulated: number;
   /** Null when the run was not asked to reach a periodic state. */
   readonly periodic: { readonly reached: boolean; readonly lastChangeK: number; readonly toleranceK: number; readonly changeByDayK: readonly number[] } | null;
   /** Run time of firing start (warm-up studies). */
   readonly firingStartT: number | null;
-  /** Solver counts over the whole run (steps, rejections, evaluations, Newton) and compute time. */
+  /** Solver counts over the whole run (steps, rejections, evaluations, Newton) and compute time (for the console only: no file carries it). */
   readonly integrator: {
     readonly name: string;
     readonly steps: number;

@@ -18,8 +18,8 @@ export function table(rows: readonly (readonly string[])[], align: readonly ('l'
 const num = (v: number | null | undefined, digits = 1): string => decimals(v, digits);
 const hhmm = isoMinute;
 
-/** The whole sheet as lines. */
-export function resultSheet(s: Summary, outDir?: string): string[] {
+/** The whole sheet as lines; `timing.seconds`, the run's own time, is shown here only (no file carries it). */
+export function resultSheet(s: Summary, outDir?: string, timing?: { readonly seconds: number }): string[] {
   const lines: string[] = [];
   const rule = '─'.repeat(78);
   lines.push(rule);
@@ -99,6 +99,11 @@ export function resultSheet(s: Summary, outDir?: string): string[] {
   lines.push('HEAT (per day)');
   lines.push(`  net loss to outside ${num(s.heat_loss_kwh_per_day)} kWh (convection ${num(s.convection_kwh_per_day)}, radiation ${num(s.radiation_kwh_per_day)}, sun absorbed ${num(s.sun_absorbed_kwh_per_day)}); from the gas ${num(s.gas_to_wall_kwh_per_day)} kWh`);
   lines.push(`  energy residual ${num(s.energy_residual_percent, 4)} %`);
+  if (s.daily.length > 1) {
+    const hottest = s.daily.reduce((a, d) => (d.shell_max_c > a.shell_max_c ? d : a));
+    const heat = s.daily.reduce((sum, d) => sum + (d.heat_loss_kwh ?? 0), 0);
+    lines.push(`  over ${s.daily.length} days: ${num(heat, 0)} kWh lost in all; hottest shell ${num(hottest.shell_max_c)} °C on day ${hottest.day} (every day in summary.json, daily)`);
+  }
   if (s.run.periodic_requested)
     lines.push(`  periodic state ${s.run.periodic_reached ? 'reached' : 'NOT reached'} after ${s.run.days_simulated} days (last change ${num(s.run.periodic_last_change_k, 3)} K, tolerance ${num(s.run.periodic_tolerance_k, 3)} K)`);
   if (s.assumptions.length) {
@@ -118,6 +123,7 @@ export function resultSheet(s: Summary, outDir?: string): string[] {
     lines.push('');
     lines.push(`Results written to ${outDir}`);
   }
+  if (timing) lines.push(`Computed and written in ${decimals(timing.seconds, 1)} s`);
   lines.push(rule);
   return lines;
 }

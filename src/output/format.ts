@@ -31,7 +31,29 @@ export function fixed(v: number | null | undefined, digits = 1): string {
  * and ±∞. For the console sheet and the CSV files, which have always been written this way.
  */
 export function decimals(v: number | null | undefined, digits: number, missing = MISSING): string {
-  return v === null || v === undefined || !Number.isFinite(v) ? missing : v.toFixed(digits);
+  return v === null || v === undefined || !Number.isFinite(v) ? missing : toFixedQuick(v, digits);
+}
+
+const POWERS_OF_TEN = [1, 10, 100, 1e3, 1e4, 1e5, 1e6];
+
+/**
+ * The same string as `x.toFixed(digits)` (digits 0–6, finite x), made about twice as fast for the
+ * millions of cells of a long run's CSV files: the scaled value is rounded with Math.round and the
+ * decimal point put in, except near a tie (within 1e-6 of a half) or for |x| · 10^digits ≥ 1e9,
+ * where toFixed itself decides. Away from a tie both give the nearest integer to x · 10^digits: the
+ * product's rounding error (half an ulp, below 1.2e-7 under 1e9) cannot cross a half that is more
+ * than 1e-6 away. Example: toFixedQuick(-0.0004, 3) = "-0.000", as (-0.0004).toFixed(3).
+ */
+export function toFixedQuick(x: number, digits: number): string {
+  const scale = POWERS_OF_TEN[digits];
+  const scaled = Math.abs(x) * (scale ?? Number.NaN);
+  if (!(scaled < 1e9) || Math.abs(scaled - Math.floor(scaled) - 0.5) < 1e-6) return x.toFixed(digits);
+  let s = String(Math.round(scaled));
+  if (digits > 0) {
+    if (s.length <= digits) s = '0'.repeat(digits - s.length + 1) + s;
+    s = `${s.slice(0, s.length - digits)}.${s.slice(s.length - digits)}`;
+  }
+  return x < 0 ? `-${s}` : s;
 }
 
 /** "2026-07-15T16:10:00+02:00" → "2026-07-15 16:10"; MISSING for null, undefined or an empty string. */

@@ -161,7 +161,7 @@ ${table(['Figure', 'Value'], [
     ['Gas exit temperature', `${num(summary.gas_exit_min_c)}–${num(summary.gas_exit_max_c)} °C`],
     ['Draft', `${num(summary.draft_min_pa)}–${num(summary.draft_max_pa)} Pa`],
   ].map(([a, b]) => `<tr>${td(esc(a))}${td(esc(b), 'n')}</tr>`), 'narrow')}
-<p class="note">Run: ${esc(r.integrator)} integrator, ${r.steps} steps, ${num(r.compute_ms, 0)} ms; ${r.segments} segments × ${r.nodes_per_segment} nodes; output every ${num(r.output_interval_min, 1)} min.</p>
+<p class="note">Run: ${esc(r.integrator)} integrator, ${r.steps} steps; ${r.segments} segments × ${r.nodes_per_segment} nodes; output every ${num(r.output_interval_min, 1)} min.</p>
 </section>`;
 }
 
@@ -174,6 +174,27 @@ function warmupSection(summary: Summary): string {
   return `<section id="warmup"><h2>Warm-up after firing</h2>
 <p>Firing started ${esc(when(w.firing_start_local))}. At the top (${num(w.top.height_m, 1)} m), the inner surface stays above the water dew point plus margin after <strong>${mins(w.top.minutes_to_water_dew)}</strong>${summary.acid_dew_point_c === null ? '' : ` and above the acid dew point plus margin after <strong>${mins(w.top.minutes_to_acid_dew)}</strong>`}.</p>
 ${table(['Height (m)', 'To water dew point + margin', 'To acid dew point + margin', 'Shell to 90 % of its rise', 'Shell to touch limit'], rows)}
+</section>`;
+}
+
+/** Days shown row by row in the report; a longer run's days are in summary.json only. */
+const MAX_DAY_ROWS = 62;
+
+/** A multi-day run: the extremes over all its days, and each day's figures when there are few. */
+function daysSection(summary: Summary): string {
+  const days = summary.daily;
+  if (days.length < 2) return '';
+  const hottest = days.reduce((a, d) => (d.shell_max_c > a.shell_max_c ? d : a));
+  const acid = summary.acid_dew_point_c !== null;
+  const lowest = days.reduce((a, d) => ((d.lowest_acid_dew_margin_k ?? d.lowest_water_dew_margin_k) < (a.lowest_acid_dew_margin_k ?? a.lowest_water_dew_margin_k) ? d : a));
+  const heat = days.reduce((sum, d) => sum + (d.heat_loss_kwh ?? 0), 0);
+  const rows = days.map(
+    (d) =>
+      `<tr>${td(String(d.day), 'n')}${td(esc(d.date))}${td(`${num(d.shell_min_c)}–${num(d.shell_max_c)}`, 'n')}${td(`${num(d.lining_min_c)}–${num(d.lining_max_c)}`, 'n')}${td(`${num(d.inner_surface_min_c)}–${num(d.inner_surface_max_c)}`, 'n')}${td(num(acid ? d.lowest_acid_dew_margin_k : d.lowest_water_dew_margin_k), 'n')}${td(num(d.heat_loss_kwh), 'n')}</tr>`,
+  );
+  return `<section id="days"><h2>Day by day</h2>
+<p>Over the ${days.length} days reported: the shell reaches ${num(hottest.shell_max_c)} °C (day ${hottest.day}); the lowest margin above the ${acid ? 'acid' : 'water'} dew point is ${num(acid ? lowest.lowest_acid_dew_margin_k : lowest.lowest_water_dew_margin_k)} K (day ${lowest.day}); ${num(heat, 0)} kWh are lost to the outside in all. Every day's figures are in summary.json (<code>daily</code>).</p>
+${days.length <= MAX_DAY_ROWS ? table(['Day', 'Date', 'Shell (°C)', 'Lining (°C)', 'Inner surface (°C)', `Lowest ${acid ? 'acid' : 'water'} dew margin (K)`, 'Heat lost (kWh)'], rows) : ''}
 </section>`;
 }
 
@@ -263,7 +284,7 @@ footer { margin-top: 34px; color: var(--muted); font-size: 13px; border-top: 1px
 
 /**
  * The self-contained report of a run: the job, the scenario in brief, the verdicts, key figures,
- * warm-up times (warm-up studies), every chart, the model's assumptions and limits, warnings and
+ * warm-up times (warm-up studies), the days of a multi-day run, every chart, the model's assumptions and limits, warnings and
  * cautions.
  */
 export function renderReportHtml(summary: Summary, inputs: ModelInputs, charts: readonly ReportChart[]): string {
@@ -288,6 +309,7 @@ ${scenarioSection(summary, inputs)}
 ${verdictSection(summary)}
 ${keyFiguresSection(summary)}
 ${warmupSection(summary)}
+${daysSection(summary)}
 ${chartsSection(charts)}
 ${assumptionsSection(summary)}
 ${listSection('warnings', 'Warnings from this run', summary.warnings, 'None.')}

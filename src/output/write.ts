@@ -1,116 +1,52 @@
 /**
- * Files out: summary.json, timeseries.csv (tidy: time × height × radial position), segments.csv
- * (tidy: time × height, the boundary quantities) and any extra artefacts (charts, report), all
- * written atomically: every file goes to a temporary name in the output folder and is renamed into
- * place only when all of them are complete, so a failure never leaves a half-written result.
+ * Files out: summary.json, the per-instant CSV files (csv.ts) and any other artefacts (charts,
+ * report), written into the run's own folder and swapped in whole (folder.ts), so a failure or a
+ * killed run never leaves a half-written result or a mix of two runs.
  */
-import { mkdirSync, writeFileSync, renameSync, rmSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { TimeSeries } from '../model/timeseries.ts';
 import type { Summary } from '../analysis/summary.ts';
-import { celsius, decimals } from './format.ts';
+import { StagedFolder, pauseForTest } from './folder.ts';
 
-/** A file to write: its name in the output folder and its content. */
+export { timeseriesCsv, segmentsCsv, seriesFileArtefacts, type StreamedArtefact } from './csv.ts';
+export { StagedFolder, OutputFolderError, cleanLeftovers } from './folder.ts';
+
+/** A file made whole: its name in the output folder and its content. */
 export interface Artefact {
   readonly fileName: string;
   readonly content: string | Buffer;
 }
 
-/** A CSV cell: `digits` decimals, empty when the value is missing. */
-const fmt = (v: number, digits: number): string => decimals(v, digits, '');
-
-/** timeseries.csv: one row per output instant × segment × node. */
-export function timeseriesCsv(series: TimeSeries): string {
-  const { segments: S, nodes: N } = series;
-  const t0 = series.t[0] ?? 0;
-  const parts: string[] = ['time,hours,height_m,position,radius_m,temperature_c\n'];
-  for (let k = 0; k < series.t.length; k++) {
-    const head = `${series.isoLocal[k]},${fmt((series.t[k]! - t0) / 3600, 4)},`;
-    for (let s = 0; s < S; s++) {
-      const h = `${head}${fmt(series.heightM[s]!, 3)},`;
-      let chunk = '';
-      for (let i = 0; i < N; i++) {
-        chunk += `${h}${series.nodeLabel[i]},${fmt(series.nodeRadius[i]!, 5)},${fmt(celsius(series.temperatureK[(k * S + s) * N + i]!), 3)}\n`;
-      }
-      parts.push(chunk);
-    }
-  }
-  return parts.join('');
-}
-
-/** segments.csv: one row per output instant × segment with the gas, outside and dew-point quantities. */
-export function segmentsCsv(series: TimeSeries): string {
-  const { segments: S } = series;
-  const t0 = series.t[0] ?? 0;
-  const g = series.segment;
-  const inst = series.instant;
-  const rows: string[] = [
-    'time,hours,height_m,air_temperature_c,wind_speed_at_height_m_s,sun_altitude_deg,sun_azimuth_deg,absorbed_sun_w_per_m,outside_film_w_m2_k,sky_temperature_c,convection_loss_w_per_m,radiation_loss_w_per_m,gas_in_c,gas_out_c,inside_film_w_m2_k,gas_to_wall_w_per_m,water_dew_point_c,water_dew_margin_k,acid_dew_point_c,acid_dew_margin_k,inlet_gas_c,mass_flow_kg_s,firing,draft_pa\n',
-  ];
-  for (let k = 0; k < series.t.length; k++) {
-    const head = `${series.isoLocal[k]},${fmt((series.t[k]! - t0) / 3600, 4)},`;
-    const tail = `${fmt(celsius(inst.inletTemperatureK[k]!), 2)},${fmt(inst.massFlow[k]!, 4)},${inst.firing[k] ? 1 : 0},${fmt(inst.draftPa[k]!, 2)}\n`;
-    let chunk = '';
-    for (let s = 0; s < S; s++) {
-      const j = k * S + s;
-      chunk +=
-        head +
-        [
-          fmt(series.heightM[s]!, 3),
-          fmt(celsius(inst.airTemperatureK[k]!), 2),
-          fmt(g.windAtHeight[j]!, 3),
-          fmt(inst.sunAltitudeDeg[k]!, 3),
-          fmt(inst.sunAzimuthDeg[k]!, 3),
-          fmt(g.sunPerMetre[j]!, 2),
-          fmt(g.outsideFilm[j]!, 3),
-          fmt(celsius(inst.skyTemperatureK[k]!), 2),
-          fmt(g.convectionPerMetre[j]!, 2),
-          fmt(g.radiationPerMetre[j]!, 2),
-          fmt(celsius(g.gasInK[j]!), 2),
-          fmt(celsius(g.gasOutK[j]!), 2),
-          fmt(g.insideFilm[j]!, 3),
-          fmt(g.gasToWallPerMetre[j]!, 2),
-          fmt(celsius(series.waterDewPointK), 2),
-          fmt(g.waterDewMarginK[j]!, 3),
-          fmt(series.acidDewPointK === null ? Number.NaN : celsius(series.acidDewPointK), 2),
-          fmt(g.acidDewMarginK[j]!, 3),
-        ].join(',') +
-        ',' +
-        tail;
-    }
-    rows.push(chunk);
-  }
-  return rows.join('');
-}
-
-/** summary.json text (stable key order, 2-space indent; non-finite numbers become null). */
+/**
+ * summary.json text (stable key order, 2-space indent; non-finite numbers become null). It holds
+ * nothing that changes from run to run of the same input (no timings, no dates of the run).
+ */
 export function summaryJson(summary: Summary): string {
   return `${JSON.stringify(summary, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
 }
 
+/** Write artefacts into the run's folder, one file after another. */
+export function writeArtefacts(folder: StagedFolder, artefacts: readonly Artefact[]): string[] {
+  return artefacts.map((a, i) => {
+    if (i > 0) pauseForTest('between-files');
+    writeFileSync(join(folder.path, a.fileName), a.content, { flag: 'wx' });
+    return join(folder.target, a.fileName);
+  });
+}
+
 /**
- * Write every artefact into `dir` atomically: all go to temporary names first, then each is renamed
- * into place. On any failure the temporary files are removed and nothing is left behind.
+ * Make `dir` hold exactly these artefacts: they are written into a fresh folder beside it, which
+ * then replaces it whole. On any failure the fresh folder is removed and `dir` is left as it was.
+ * Returns the paths of the files in `dir`.
  */
 export function writeArtefactsAtomically(dir: string, artefacts: readonly Artefact[]): string[] {
-  mkdirSync(dir, { recursive: true });
-  const tag = `.stackday-tmp-${process.pid}-${Date.now()}`;
-  const temps: string[] = [];
+  const folder = StagedFolder.open(dir);
   try {
-    for (const a of artefacts) {
-      const tmp = join(dir, `${a.fileName}${tag}`);
-      writeFileSync(tmp, a.content);
-      temps.push(tmp);
-    }
+    const written = writeArtefacts(folder, artefacts);
+    folder.commit();
+    return written;
   } catch (e) {
-    for (const t of temps) rmSync(t, { force: true });
+    folder.abandon();
     throw e;
   }
-  const written: string[] = [];
-  artefacts.forEach((a, i) => {
-    const target = join(dir, a.fileName);
-    renameSync(temps[i]!, target);
-    written.push(target);
-  });
-  return written;
 }

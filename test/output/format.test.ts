@@ -1,6 +1,7 @@
 /** How figures read: °C from K, the two ways of fixing decimals, times, and the one missing mark. */
 import { describe, it, expect } from 'vitest';
-import { celsius, clockFromSeconds, decimals, fixed, isoClock, isoMinute, MISSING } from '../../src/output/format.ts';
+import { celsius, clockFromSeconds, decimals, fixed, isoClock, isoMinute, MISSING, toFixedQuick } from '../../src/output/format.ts';
+import { seededUniform } from '../../scripts/random.ts';
 
 describe('format', () => {
   it('converts kelvin to degrees Celsius', () => {
@@ -22,6 +23,17 @@ describe('format', () => {
     expect(decimals(12.35, 1)).toBe('12.3');
     expect(decimals(-0.04, 1)).toBe('-0.0');
     expect(decimals(Number.NaN, 2, '')).toBe('');
+  });
+
+  it('writes the CSV cells quickly with exactly the string toFixed gives (the reference: the engine\'s own toFixed, ECMA-262)', () => {
+    const u = seededUniform(12);
+    const values: number[] = [4.35, 0, -0, 0.5, 1.5, 2.5, -2.5, 1.005, 2.675, 1.0005, -0.0004, 0.0005, 12.35, 999.9995, 1e8 + 0.5, 5e8, 2e9, -1234.56785, 273.15 - 273.15];
+    for (let i = 0; i < 200_000; i++) {
+      const magnitude = 10 ** (Math.floor(u() * 14) - 5); // 1e-5 … 1e8, the range of the files' numbers and beyond
+      values.push((u() - 0.5) * 2 * magnitude);
+      values.push(Math.round(u() * 1e6) / 1e3 + 0.0005); // ties and near-ties at three decimals
+    }
+    for (const v of values) for (let d = 0; d <= 5; d++) if (toFixedQuick(v, d) !== v.toFixed(d)) expect(`${v} at ${d}: ${toFixedQuick(v, d)}`).toBe(v.toFixed(d));
   });
 
   it('shows one mark for every missing value', () => {

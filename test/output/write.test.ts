@@ -1,9 +1,6 @@
-/** Files out: tidy CSVs, summary.json without NaN, atomic writes that leave nothing half-written. */
+/** Files out: tidy CSVs, summary.json without NaN (atomic folders: folder.test.ts). */
 import { describe, it, expect } from 'vitest';
-import { mkdtempSync, readdirSync, readFileSync, existsSync, mkdirSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { timeseriesCsv, segmentsCsv, summaryJson, writeArtefactsAtomically } from '../../src/output/write.ts';
+import { timeseriesCsv, segmentsCsv, summaryJson } from '../../src/output/write.ts';
 import { resultSheet } from '../../src/output/console.ts';
 import { demoStudy } from '../support/demoStudy.ts';
 
@@ -31,27 +28,6 @@ describe('CSV files', () => {
     expect(text).not.toMatch(/NaN/);
     const j = JSON.parse(text);
     for (const key of ['peak_shell_c', 'peak_lining_c', 'heat_loss_kwh_per_day', 'energy_residual_percent', 'through_wall_max_delta_t_k']) expect(j).toHaveProperty(key);
-  });
-});
-
-describe('writeArtefactsAtomically', () => {
-  it('writes every file and leaves no temporary files', () => {
-    const dir = join(mkdtempSync(join(tmpdir(), 'stackday-write-')), 'out');
-    writeArtefactsAtomically(dir, [
-      { fileName: 'a.txt', content: 'one' },
-      { fileName: 'b.bin', content: Buffer.from([1, 2, 3]) },
-    ]);
-    expect(readdirSync(dir).sort()).toEqual(['a.txt', 'b.bin']);
-    expect(readFileSync(join(dir, 'a.txt'), 'utf8')).toBe('one');
-  });
-
-  it('leaves nothing behind when a file cannot be written', () => {
-    const dir = join(mkdtempSync(join(tmpdir(), 'stackday-write-')), 'out');
-    mkdirSync(join(dir, 'blocked.txt.stackday-tmp-x'), { recursive: true });
-    // a file name that is a folder path cannot be written: the first file must not survive either
-    expect(() => writeArtefactsAtomically(dir, [{ fileName: 'a.txt', content: 'one' }, { fileName: 'no/such/dir.txt', content: 'two' }])).toThrow();
-    expect(existsSync(join(dir, 'a.txt'))).toBe(false);
-    expect(readdirSync(dir).filter((f) => f.includes('.stackday-tmp-') && !f.startsWith('blocked'))).toEqual([]);
   });
 });
 

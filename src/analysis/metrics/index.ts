@@ -17,8 +17,11 @@ import { dewPointFigures, lowestMargins } from './dewPoints.ts';
 import { evaluatedEnergy, heatPerDay, residualWarning } from './energy.ts';
 import { warmupTimes } from './warmup.ts';
 import { verdicts } from './verdicts.ts';
+import { DailyExtremes } from './daily.ts';
+import { replaySeries } from '../../model/sinks.ts';
 
 export { evaluationInstants, type Location } from './evaluated.ts';
+export { DailyExtremes } from './daily.ts';
 export { fractionBelowZero } from './dewPoints.ts';
 export { timeToReach, timeToStayAbove } from './warmup.ts';
 export type { PositionSwingAt } from './extremes.ts';
@@ -28,6 +31,11 @@ export interface SummaryContext {
   readonly result: RunResult;
   readonly version: string;
   readonly description?: string | null;
+  /**
+   * The per-day figures gathered while the run went (a sink passed to simulate); without it they
+   * are found from the days the result's series holds.
+   */
+  readonly daily?: DailyExtremes;
 }
 
 /**
@@ -94,7 +102,7 @@ function locations(
 }
 
 /** The summary of a run (summary.json) and where each of its located figures occurs. */
-export function summariseRun({ inputs, result, version, description }: SummaryContext): SummarisedRun {
+export function summariseRun({ inputs, result, version, description, daily }: SummaryContext): SummarisedRun {
   const mode = inputs.run.mode;
   const ev = evaluated(result.series, mode);
   const extremes = wallExtremes(ev);
@@ -109,6 +117,8 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
   const warnings = [...result.warnings];
   if (result.periodic && !result.periodic.reached)
     warnings.push(`the periodic state was NOT reached in ${result.daysSimulated} days (last day-to-day change ${round(result.periodic.lastChangeK, 3)} K > tolerance ${result.periodic.toleranceK} K); figures are for the last simulated day`);
+  if (result.retained.truncated)
+    warnings.push(`the warm-up figures and charts cover the first ${result.retained.days} of ${result.daysSimulated} simulated days (the days the run keeps in memory); the files and the daily figures cover every day`);
   const residual = residualWarning(energy);
   if (residual !== null) warnings.push(residual);
 
@@ -118,7 +128,7 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
     run: {
       mode,
       days_simulated: result.daysSimulated,
-      evaluated_over: mode === 'warmup' ? 'the whole run from firing start' : result.periodic ? 'the settled (periodic) day' : 'the last simulated day',
+      evaluated_over: evaluatedOver(result, mode),
       periodic_requested: result.periodic !== null,
       periodic_reached: result.periodic ? result.periodic.reached : null,
       periodic_last_change_k: result.periodic ? round(result.periodic.lastChangeK, 4) : null,
@@ -131,7 +141,6 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
       jacobian_evaluations: result.integrator.jacobianEvaluations,
       newton_iterations: result.integrator.newtonIterations,
       newton_failures: result.integrator.newtonFailures,
-      compute_ms: round(result.integrator.computeMs, 1),
       output_interval_min: round(inputs.run.outputInterval / 60, 2),
       segments: ev.S,
       nodes_per_segment: ev.N,
@@ -146,6 +155,7 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
     ...gasAndDraftRanges(ev),
     ...heatPerDay(energy),
     warmup,
+    daily: dailyFigures(result, daily),
     assumptions: runAssumptions(inputs, result),
     warnings,
     cautions: CAUTIONS,
@@ -161,6 +171,22 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
       warmup: warmup !== null,
     }),
   };
+}
+
+/** Which instants the figures cover, in words. */
+function evaluatedOver(result: RunResult, mode: 'cycle' | 'warmup'): string {
+  if (mode === 'warmup') return result.retained.truncated ? `the first ${result.retained.days === 1 ? 'day' : `${result.retained.days} days`} from firing start` : 'the whole run from firing start';
+  return result.periodic ? 'the settled (periodic) day' : 'the last simulated day';
+}
+
+/** Figures of every day: from the sink that saw the run, or else from the days the series holds. */
+function dailyFigures(result: RunResult, daily: DailyExtremes | undefined) {
+  let sink = daily;
+  if (!sink) {
+    sink = new DailyExtremes();
+    replaySeries(result.series, [sink]);
+  }
+  return sink.figures(result.energy.byDay);
 }
 
 /** The summary of a run (summary.json). */

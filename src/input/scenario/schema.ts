@@ -308,6 +308,22 @@ const run = z.strictObject({
   absolute_tolerance: quantity('temperatureDifference', { min: 1e-6, max: 1, wording: 'a temperature difference from 1e-6 K to 1 K' }, 'Absolute tolerance of the integrator').prefault(0.01),
 });
 
+/** What a run writes of one per-instant file. */
+const seriesFile = (file: string) =>
+  z
+    .enum(['all', 'last-day', 'daily-extremes', 'off'])
+    .default('all')
+    .meta({ description: `What ${file} holds: every output instant (all), the last simulated day (last-day), per day the lowest and highest value of every column (daily-extremes), or no file (off).` });
+const seriesFileInterval = (file: string) =>
+  quantity('duration', { min: 60, max: 24 * 3600, wording: 'an interval from 1 min to 24 h' }, `Write ${file} rows only at whole multiples of this after the run's start (with all and last-day; a whole multiple of run.output_interval)`).optional();
+
+const output = z.strictObject({
+  timeseries: seriesFile('timeseries.csv'),
+  timeseries_interval: seriesFileInterval('timeseries.csv'),
+  segments: seriesFile('segments.csv'),
+  segments_interval: seriesFileInterval('segments.csv'),
+});
+
 const limits = z.strictObject({
   shell_touch: temperature('Highest allowed outer-surface temperature (touch / burn limit)').optional(),
   lining_service: temperature('Highest allowed lining temperature (default: the lining material limit)').optional(),
@@ -327,6 +343,7 @@ export const scenarioSchema = z
     weather,
     flue,
     run: run.prefault({}),
+    output: output.prefault({}),
     limits: limits.prefault({}),
   })
   .meta({ title: 'stackday scenario', description: 'A stack, its wall build-up, the site, the weather, the firing and the run.' });

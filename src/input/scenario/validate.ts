@@ -211,6 +211,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   if (s.run.mode === 'warmup' && s.run.days === 'until-periodic')
     problems.push('run.days: found "until-periodic" with run.mode warmup; expected a whole number of days (a warm-up from a cold wall is not a periodic study)');
   if (s.run.output_interval > SECONDS_PER_DAY / 2) problems.push(`run.output_interval: found ${s.run.output_interval / 60} min; expected at most 12 h`);
+  problems.push(...outputProblems(s));
 
   if (problems.length > 0 || !weather || !composition) return null;
 
@@ -265,6 +266,10 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       atol: s.run.absolute_tolerance,
       firingStartClockS: s.run.firing_start,
     },
+    output: {
+      timeseries: { content: s.output.timeseries, intervalS: s.output.timeseries_interval },
+      segments: { content: s.output.segments, intervalS: s.output.segments_interval },
+    },
     limits: {
       shellTouchK: s.limits.shell_touch,
       liningServiceK: s.limits.lining_service ?? (lining.kind === 'solid' ? lining.maxServiceTemperatureK : undefined),
@@ -273,6 +278,20 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       waterDewMarginK: s.limits.water_dew_margin,
     },
   };
+}
+
+/** An output interval must be a whole multiple of the run's output interval, and apply to a form that has rows per instant. */
+function outputProblems(s: Scenario): string[] {
+  const problems: string[] = [];
+  for (const file of ['timeseries', 'segments'] as const) {
+    const interval = s.output[`${file}_interval`];
+    if (interval === undefined) continue;
+    const key = `output.${file}_interval`;
+    const ratio = interval / s.run.output_interval;
+    if (Math.abs(ratio - Math.round(ratio)) > 1e-9) problems.push(`${key}: found ${interval / 60} min; expected a whole multiple of run.output_interval (${s.run.output_interval / 60} min)`);
+    if (s.output[file] !== 'all' && s.output[file] !== 'last-day') problems.push(`${key}: found an interval with output.${file} ${s.output[file]}; expected output.${file} all or last-day (the interval thins their rows)`);
+  }
+  return problems;
 }
 
 /**

@@ -98,6 +98,8 @@ export function baseOptions(title: string, subtitle: string | null, f: Typograph
   return {
     responsive: false,
     animation: false as const,
+    // tick labels are formatted by Intl in this locale, never the machine's (a German machine would write decimal commas)
+    locale: 'en-US',
     devicePixelRatio: 1,
     parsing: false as const,
     layout: { padding: { top: 4, right: Math.round(16 * f.scale), bottom: 4, left: 4 } },
