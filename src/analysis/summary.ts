@@ -98,6 +98,34 @@ export interface DayFigures {
   readonly gas_to_wall_kwh: number | null;
 }
 
+/** The sun-facing side (walls cut into circumferential sectors only). */
+export interface SectorSummary {
+  /** Number of sectors; sector j faces the azimuth 360 j / count degrees clockwise from north. */
+  readonly count: number;
+  /** Outward azimuth of the sector where the hottest shell occurs, degrees clockwise from north. */
+  readonly peak_shell_azimuth_deg: number;
+  /** The shell round the circumference at the hottest instant and height, sector by sector, °C. */
+  readonly shell_by_sector_at_peak_c: readonly number[];
+  /** Largest difference between the hottest and the coldest sector of the shell at one height, K. */
+  readonly largest_side_to_side_shell_k: number;
+  readonly largest_side_to_side_shell_time: string;
+  readonly largest_side_to_side_shell_height_m: number;
+  /** Largest difference between opposite sides of the wall's mean temperature (twice its first circumferential harmonic), K. */
+  readonly largest_side_to_side_wall_k: number;
+  readonly largest_side_to_side_wall_time: string;
+  readonly largest_side_to_side_wall_height_m: number;
+  /** Thermal expansion used for the bow, 1/K (the outermost layer with expansion data). */
+  readonly bow_expansion_per_k: number;
+  /** Largest tip deflection of the stack as a cantilever from its side-to-side difference, mm (an indicator, not a structural check). */
+  readonly bow_largest_tip_deflection_mm: number;
+  readonly bow_largest_tip_deflection_time: string;
+  /** Curvature α ΔT_side / D of each segment at that instant, 1/km, bottom → top. */
+  readonly bow_curvature_per_km_by_height: readonly { readonly height_m: number; readonly curvature_per_km: number }[];
+  /** Sectors with the most and the least beam sunshine over the evaluated period (outward azimuths, degrees). */
+  readonly sunniest_sector_azimuth_deg: number;
+  readonly shadiest_sector_azimuth_deg: number;
+}
+
 export interface Summary {
   readonly tool: { readonly name: 'stackday'; readonly version: string };
   readonly scenario: { readonly name: string; readonly description: string | null; readonly site: string; readonly first_day: string; readonly time_zone: string };
@@ -170,14 +198,20 @@ export interface Summary {
   readonly assumptions: readonly string[];
   /** Problems the reader must see: correlations beyond their range without justification (how far, where), an unreached periodic state, a poor energy balance. */
   readonly warnings: readonly string[];
+  /** The sun-facing side: only for a wall cut into circumferential sectors (absent otherwise). */
+  readonly sectors?: SectorSummary;
   readonly cautions: readonly string[];
 }
+
+/** The caution of the circumferentially averaged wall (left out when the wall is cut into sectors). */
+export const AVERAGED_SUN_CAUTION =
+  'The sun is averaged round the circumference: the sun-facing side of the shell runs hotter, and the shaded side of the lining colder, than these figures.';
 
 /** The cautions every report carries (docs/model.md "Cautions"). */
 export const CAUTIONS: readonly string[] = [
   'These results inform engineering judgement; they do not certify a design or an installation.',
   'Hot surfaces burn: touch limits such as those in ISO 13732-1 and ASTM C1055 are guidance; guard or insulate surfaces people can reach.',
-  'The sun is averaged round the circumference: the sun-facing side of the shell runs hotter, and the shaded side of the lining colder, than these figures.',
+  AVERAGED_SUN_CAUTION,
   'Flue gas below its acid or water dew point condenses and corrodes linings and shells; verify with measurements where margins are small.',
   'Structural adequacy (wind, seismic, thermal stress, foundations) is not checked; the stress figure is an indicator only.',
   'Follow local codes and standards, and have a licensed engineer review any design or operating decision based on these figures.',

@@ -95,6 +95,14 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
       ).map((l) => `    ${l}`),
     );
   }
+  if (s.sectors) {
+    const x = s.sectors;
+    lines.push('');
+    lines.push(`SUN-FACING SIDE (${x.count} sectors round the circumference; azimuths clockwise from north)`);
+    lines.push(`  hottest shell ${num(s.peak_shell_c)} °C on the side facing ${num(x.peak_shell_azimuth_deg, 1)}°; sunniest side ${num(x.sunniest_sector_azimuth_deg, 1)}°, shadiest ${num(x.shadiest_sector_azimuth_deg, 1)}°`);
+    lines.push(`  largest side-to-side difference: shell ${num(x.largest_side_to_side_shell_k)} K (${hhmm(x.largest_side_to_side_shell_time)} at ${num(x.largest_side_to_side_shell_height_m)} m), mean wall ${num(x.largest_side_to_side_wall_k)} K (${hhmm(x.largest_side_to_side_wall_time)} at ${num(x.largest_side_to_side_wall_height_m)} m)`);
+    lines.push(`  thermal bow: tip deflection up to ${num(x.bow_largest_tip_deflection_mm)} mm (${hhmm(x.bow_largest_tip_deflection_time)}; α ${x.bow_expansion_per_k} /K) — an indicator, not a structural check`);
+  }
   lines.push('');
   lines.push('HEAT (per day)');
   lines.push(`  net loss to outside ${num(s.heat_loss_kwh_per_day)} kWh (convection ${num(s.convection_kwh_per_day)}, radiation ${num(s.radiation_kwh_per_day)}, sun absorbed ${num(s.sun_absorbed_kwh_per_day)}); from the gas ${num(s.gas_to_wall_kwh_per_day)} kWh`);

@@ -124,6 +124,21 @@ ${table(['Status', 'Limit', 'Governing figure', 'Limit value', 'When (local)', '
 </section>`;
 }
 
+/** The sun-facing side: walls cut into sectors only. */
+function sectorsSection(summary: Summary): string {
+  const x = summary.sectors;
+  if (!x) return '';
+  const rows = [
+    ['Hottest shell', `${num(summary.peak_shell_c)} °C facing ${num(x.peak_shell_azimuth_deg, 1)}°`, when(summary.peak_shell_time), num(summary.peak_shell_height_m, 1)],
+    ['Largest side-to-side difference of the shell', `${num(x.largest_side_to_side_shell_k)} K`, when(x.largest_side_to_side_shell_time), num(x.largest_side_to_side_shell_height_m, 1)],
+    ['Largest side-to-side difference of the mean wall temperature', `${num(x.largest_side_to_side_wall_k)} K`, when(x.largest_side_to_side_wall_time), num(x.largest_side_to_side_wall_height_m, 1)],
+    ['Largest tip deflection (thermal bow, indicator)', `${num(x.bow_largest_tip_deflection_mm)} mm`, when(x.bow_largest_tip_deflection_time), '–'],
+  ].map((r) => `<tr>${td(esc(r[0]!))}${td(esc(r[1]!), 'n')}${td(esc(r[2]!))}${td(esc(r[3]!), 'n')}</tr>`);
+  return `<section id="sectors"><h2>The sun-facing side</h2>
+<p>The wall is cut into ${x.count} sectors round the circumference (outward azimuths clockwise from north): sunniest side ${num(x.sunniest_sector_azimuth_deg, 1)}°, shadiest ${num(x.shadiest_sector_azimuth_deg, 1)}°. The bow is the curvature α·ΔT/D of each segment from the difference between opposite sides (α = ${x.bow_expansion_per_k} /K) summed as a cantilever fixed at its base: an indicator of the movement the sun causes, not a structural check.</p>
+${table(['figure', 'value', 'when', 'height m'], rows, 'narrow')}</section>`;
+}
+
 function keyFiguresSection(summary: Summary): string {
   const r = summary.run;
   const periodic = !r.periodic_requested ? `not requested (${r.days_simulated} day(s) simulated)` : r.periodic_reached ? `reached after ${r.days_simulated} days (last day-to-day change ${num(r.periodic_last_change_k, 4)} K ≤ ${r.periodic_tolerance_k} K)` : `<strong>NOT reached</strong> in ${r.days_simulated} days (last change ${num(r.periodic_last_change_k, 4)} K &gt; ${r.periodic_tolerance_k} K)`;
@@ -308,6 +323,7 @@ ${jobSection()}
 ${scenarioSection(summary, inputs)}
 ${verdictSection(summary)}
 ${keyFiguresSection(summary)}
+${sectorsSection(summary)}
 ${warmupSection(summary)}
 ${daysSection(summary)}
 ${chartsSection(charts)}

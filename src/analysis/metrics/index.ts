@@ -8,7 +8,8 @@
 import type { ModelInputs } from '../../model/inputs.ts';
 import type { RunResult, TimeSeries } from '../../model/timeseries.ts';
 import { runAssumptions } from '../assumptions.ts';
-import { CAUTIONS, type Summary } from '../summary.ts';
+import { AVERAGED_SUN_CAUTION, CAUTIONS, type Summary } from '../summary.ts';
+import { sectorFigures } from './sectors.ts';
 import { round } from '../rounding.ts';
 import { evaluated, type Evaluated, type Location } from './evaluated.ts';
 import { gasAndDraftRanges, positionRanges, wallExtremeFigures, wallExtremes, type PositionSwingAt } from './extremes.ts';
@@ -61,6 +62,8 @@ export interface SummaryLocations {
   readonly lowestAcidDewMargin: Location | null;
   /** Warm-up studies: the output instant stated as warmup.firing_start_local; null for a cycle study. */
   readonly firingStart: number | null;
+  /** Walls cut into sectors: the sunniest and shadiest sector (null with one sector). */
+  readonly sectors?: { readonly sunniest: number; readonly shadiest: number } | null;
 }
 
 export interface SummarisedRun {
@@ -98,6 +101,7 @@ function locations(
     lowestAcidDewMargin: p.margins.acid,
     // warmupTimes states the first output instant as the firing start
     firingStart: p.warmup && ev.series.t.length > 0 ? 0 : null,
+    sectors: null,
   };
 }
 
@@ -121,6 +125,8 @@ export function summariseRun({ inputs, result, version, description, daily }: Su
     warnings.push(`the warm-up figures and charts cover the first ${result.retained.days} of ${result.daysSimulated} simulated days (the days the run keeps in memory); the files and the daily figures cover every day`);
   const residual = residualWarning(energy);
   if (residual !== null) warnings.push(residual);
+  const outerDiameter = 2 * result.series.nodeRadius[result.series.nodes - 1]!;
+  const sectors = sectorFigures(ev, inputs.layers, outerDiameter, inputs.stack.height, extremes.peakShell);
 
   const summary: Summary = {
     tool: { name: 'stackday', version },
@@ -158,18 +164,22 @@ export function summariseRun({ inputs, result, version, description, daily }: Su
     daily: dailyFigures(result, daily),
     assumptions: runAssumptions(inputs, result),
     warnings,
-    cautions: CAUTIONS,
+    cautions: sectors ? CAUTIONS.filter((x) => x !== AVERAGED_SUN_CAUTION) : CAUTIONS,
+    ...(sectors ? { sectors: sectors.summary } : {}),
   };
   return {
     summary,
-    locations: locations(ev, {
-      extremes,
-      throughWall: throughWall.at,
-      layerMaxDeltaT: maxDeltaT.map((d) => d.at),
-      positionSwing: swingAt,
-      margins: { water: margins.water.at, acid: margins.acid?.at ?? null },
-      warmup: warmup !== null,
-    }),
+    locations: {
+      ...locations(ev, {
+        extremes,
+        throughWall: throughWall.at,
+        layerMaxDeltaT: maxDeltaT.map((d) => d.at),
+        positionSwing: swingAt,
+        margins: { water: margins.water.at, acid: margins.acid?.at ?? null },
+        warmup: warmup !== null,
+      }),
+      sectors: sectors ? { sunniest: sectors.at.sunniest, shadiest: sectors.at.shadiest } : null,
+    },
   };
 }
 

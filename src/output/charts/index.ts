@@ -16,6 +16,8 @@ import { gasAlongHeight } from './gasAlongHeight.ts';
 import { outsideHeatFlows } from './outsideHeatFlows.ts';
 import { warmupInnerSurface } from './warmupInnerSurface.ts';
 import { renderChartPng } from './render.ts';
+import { shellRoundTheCircumference } from './shellRound.ts';
+import { shellSunnyAndShadySides } from './sectorsThroughDay.ts';
 import { decimals } from '../format.ts';
 
 export { renderChartPng } from './render.ts';
@@ -80,5 +82,10 @@ export function renderAllCharts(series: TimeSeries, summary: Summary, inputs: Mo
   configs.push({ name: 'outside-heat-flows', config: outsideHeatFlows(series, summary, inputs, { ...common, segment: series.segments - 1 }) });
   const warm = warmupInnerSurface(series, summary, inputs, common);
   if (warm !== null) configs.push({ name: 'warmup-inner-surface', config: warm });
+  const sides = options.locations?.sectors;
+  if (series.sectors > 1 && options.locations && sides) {
+    configs.push({ name: 'shell-round-the-circumference', config: shellRoundTheCircumference(series, summary, inputs, options.locations.peakShell, common) });
+    configs.push({ name: 'shell-sunny-and-shady-sides', config: shellSunnyAndShadySides(series, summary, inputs, sides, common) });
+  }
   return configs.map(({ name, config }) => ({ name, fileName: `${name}.png`, title: chartTitle(config), config, png: renderChartPng(config, size) }));
 }

@@ -69,7 +69,17 @@ export const LOOK = {
   radiation: { color: '#8a5a9e', dash: [3, 3], point: 'triangle' },
   net: { color: '#222222', dash: [14, 4, 3, 4], point: 'rect' },
   gasToWall: { color: '#a33b1a', dash: [6, 4], point: 'rectRot' },
+  sunniest: { color: '#c45a12', dash: [], point: 'star' },
+  shadiest: { color: '#2b5d8c', dash: [8, 4], point: 'circle' },
+  roundMean: { color: '#555555', dash: [2, 3], point: false },
 } as const;
+
+/** Lines of the shell round the circumference at a few heights, top first. */
+export const ROUND_LOOKS: readonly LineLook[] = [
+  { color: '#8c1b1b', dash: [], point: 'circle' },
+  { color: '#d0792c', dash: [10, 4], point: 'triangle' },
+  { color: '#2b5d8c', dash: [4, 3], point: 'rect' },
+];
 
 /** Map-cell classes, in order of margin (the key of the acid-margin map). */
 export const MARGIN_CLASS_COLORS = {

@@ -8,6 +8,7 @@ import { celsius, fixed, round } from '../format.ts';
 import { chartTypography, LOOK, wallRamp } from './look.ts';
 import { hourStep, localHours, minMax } from './scales.ts';
 import { axis, baseOptions, boundsWithLimits, clampSegment, limitDatasets, lineDataset, namedNodes, periodWords, positionName, temperatureLimits, timeAxisTitle, type Point, type SegmentChartOptions } from './parts.ts';
+import { nodeTemperatureK } from './parts.ts';
 
 /**
  * Temperatures through the evaluated period at one height: gas, inner surface, every interface,
@@ -18,7 +19,6 @@ export function temperaturesThroughDay(series: TimeSeries, summary: Summary, inp
   const f = chartTypography(options.width, options.height);
   const seg = clampSegment(series, options.segment);
   const S = series.segments;
-  const N = series.nodes;
   const ks = evaluationInstants(series, inputs.run.mode);
   const hours = localHours(series, ks);
   const nodes = namedNodes(series);
@@ -27,7 +27,7 @@ export function temperaturesThroughDay(series: TimeSeries, summary: Summary, inp
   const gas = ks.map((k, q) => ({ x: hours[q]!, y: round(celsius((series.segment.gasInK[k * S + seg]! + series.segment.gasOutK[k * S + seg]!) / 2)) }));
   datasets.push(lineDataset('Flue gas (segment mean)', gas, LOOK.gas, f, 0, f.lineWidth * 1.3));
   nodes.forEach((i, j) => {
-    const data = ks.map((k, q) => ({ x: hours[q]!, y: round(celsius(series.temperatureK[(k * S + seg) * N + i]!)) }));
+    const data = ks.map((k, q) => ({ x: hours[q]!, y: round(celsius(nodeTemperatureK(series, k, seg, i))) }));
     datasets.push(lineDataset(positionName(series, i), data, looks[j]!, f, j + 1));
   });
   const air = ks.map((k, q) => ({ x: hours[q]!, y: round(celsius(series.instant.airTemperatureK[k]!)) }));
@@ -43,7 +43,7 @@ export function temperaturesThroughDay(series: TimeSeries, summary: Summary, inp
     type: 'line',
     data: { datasets },
     options: {
-      ...baseOptions(`Temperatures at ${fixed(series.heightM[seg]!)} m (${where})`, periodWords(summary, series, ks), f, 'bottom'),
+      ...baseOptions(`Temperatures at ${fixed(series.heightM[seg]!)} m (${where})`, `${periodWords(summary, series, ks)}${series.sectors > 1 ? `; wall: mean of ${series.sectors} sectors round the circumference` : ""}`, f, 'bottom'),
       scales: {
         x: axis(timeAxisTitle(summary), f, { min: x0, max: x1, ticks: { stepSize: hourStep(x1 - x0) } }),
         y: axis('Temperature (°C)', f, { min: y.min, max: y.max, ticks: { stepSize: y.step } }),

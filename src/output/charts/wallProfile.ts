@@ -10,6 +10,7 @@ import { celsius, fixed, isoClock, round } from '../format.ts';
 import { chartTypography, FONT_FAMILY, GAP_BAND_FILL, INK, LAYER_BAND_FILLS, PROFILE_LOOKS } from './look.ts';
 import { minMax, niceBounds } from './scales.ts';
 import { axis, baseOptions, figureLocations, lineDataset, type ChartBuildOptions } from './parts.ts';
+import { nodeTemperatureK } from './parts.ts';
 import type { BandSpec } from './render.ts';
 
 /**
@@ -19,7 +20,6 @@ import type { BandSpec } from './render.ts';
  */
 export function wallProfile(series: TimeSeries, summary: Summary, inputs: ModelInputs, options: ChartBuildOptions = {}): ChartConfiguration {
   const f = chartTypography(options.width, options.height);
-  const S = series.segments;
   const N = series.nodes;
   const at = figureLocations(series, inputs, options);
   const wanted = [
@@ -29,16 +29,17 @@ export function wallProfile(series: TimeSeries, summary: Summary, inputs: ModelI
   ];
   const seen = new Set<string>();
   const profiles = wanted
-    .map((w) => ({ what: w.what, k: w.at.instant, seg: w.at.segment }))
+    .map((w) => ({ what: w.what, k: w.at.instant, seg: w.at.segment, sector: w.at.sector }))
     .filter((p) => {
-      const key = `${p.k}/${p.seg}`;
+      const key = `${p.k}/${p.seg}/${p.sector}`;
       if (seen.has(key)) return false;
       seen.add(key);
       return true;
     });
   const datasets = profiles.map((p, j) => {
-    const data = Array.from({ length: N }, (_, i) => ({ x: round(series.nodeRadius[i]!, 5), y: round(celsius(series.temperatureK[(p.k * S + p.seg) * N + i]!)) }));
-    const ds = lineDataset(`${p.what}: ${isoClock(series.isoLocal[p.k]!)} at ${fixed(series.heightM[p.seg]!)} m`, data, PROFILE_LOOKS[j % PROFILE_LOOKS.length]!, f, j);
+    const data = Array.from({ length: N }, (_, i) => ({ x: round(series.nodeRadius[i]!, 5), y: round(celsius(nodeTemperatureK(series, p.k, p.seg, i, p.sector))) }));
+    const facing = p.sector === undefined ? '' : `, facing ${fixed((360 * p.sector) / series.sectors, 0)}°`;
+    const ds = lineDataset(`${p.what}: ${isoClock(series.isoLocal[p.k]!)} at ${fixed(series.heightM[p.seg]!)} m${facing}`, data, PROFILE_LOOKS[j % PROFILE_LOOKS.length]!, f, j);
     return { ...ds, pointRadius: f.pointRadius };
   });
   const r0 = series.nodeRadius[0]!;

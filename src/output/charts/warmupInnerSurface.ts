@@ -10,6 +10,7 @@ import { celsius, fixed, isoMinute, round } from '../format.ts';
 import { chartTypography, WARMUP_LOOKS } from './look.ts';
 import { minMax, minuteStep } from './scales.ts';
 import { axis, baseOptions, boundsWithLimits, figureLocations, limitDatasets, lineDataset, temperatureLimits, verticalDataset, type ChartBuildOptions, type Point } from './parts.ts';
+import { nodeTemperatureK } from './parts.ts';
 
 /**
  * Warm-up studies: inner-surface temperature at the top (and, for comparison, at the bottom)
@@ -20,14 +21,13 @@ export function warmupInnerSurface(series: TimeSeries, summary: Summary, inputs:
   if (summary.warmup === null) return null;
   const f = chartTypography(options.width, options.height);
   const S = series.segments;
-  const N = series.nodes;
   const ks = evaluationInstants(series, inputs.run.mode);
   const kFiring = figureLocations(series, inputs, options).firingStart ?? ks[0] ?? 0;
   const t0 = series.t[kFiring]!;
   const after = ks.filter((k) => series.t[k]! >= t0 - 1e-6);
   const minutes = after.map((k) => round((series.t[k]! - t0) / 60, 4));
   const top = S - 1;
-  const inner = (seg: number) => after.map((k, q) => ({ x: minutes[q]!, y: round(celsius(series.temperatureK[(k * S + seg) * N]!)) }));
+  const inner = (seg: number) => after.map((k, q) => ({ x: minutes[q]!, y: round(celsius(nodeTemperatureK(series, k, seg, 0))) }));
   const datasets: ChartDataset<'line', Point[]>[] = [
     lineDataset(`Inner surface at the top (${fixed(series.heightM[top]!)} m)`, inner(top), WARMUP_LOOKS.top, f, 0, f.lineWidth * 1.3),
   ];
