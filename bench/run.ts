@@ -71,6 +71,10 @@ console.log(`   output every 1 min: ${oneMinute.toFixed(1)} ms against ${tenMinu
 const demoInputs = loadScenarioFile('scenarios/demo.yaml').inputs;
 const demo = timeRuns(demoInputs, 7);
 console.log(`   demo until periodic: ${demo.ms.toFixed(1)} ms compute (median of 7), ${demo.result.daysSimulated} days, ${demo.result.integrator.steps} steps, target ≤ 100 ms`);
+const demoDay: ModelInputs = { ...demoInputs, run: { ...demoInputs.run, length: { kind: 'days', days: 1 }, initial: 'steady-at-start' } };
+const oneSector = timeRuns(demoDay, 5).ms;
+const sixteen = timeRuns({ ...demoDay, stack: { ...demoDay.stack, sectors: 16 } }, 5).ms;
+console.log(`   demo day with 16 sectors: ${sixteen.toFixed(1)} ms against ${oneSector.toFixed(1)} ms with one = ${(sixteen / oneSector).toFixed(1)}×, target ≤ 20×`);
 console.log('');
 
 // ---- 2. implicit vs explicit at equal accuracy on the stiff steel shell ----

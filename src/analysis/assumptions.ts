@@ -41,6 +41,11 @@ export function runAssumptions(inputs: ModelInputs, result: RunResult): string[]
     clear.kind === 'ashrae-1985'
       ? 'Clear sky where the weather gives no irradiance: ASHRAE (1985) with its monthly constants interpolated by day between the 21sts.'
       : 'Clear sky where the weather gives no irradiance: ASHRAE (2009) with the site\'s monthly optical depths, interpolated by day.',
+    ...((inputs.stack.sectors ?? 1) > 1
+      ? [
+          `The wall is cut into ${inputs.stack.sectors} sectors round the circumference: each takes the beam by the cosine between its outward normal and the sun's direction, diffuse and ground-reflected light alike; neighbouring sectors exchange heat by conduction round every layer (air gaps: still air and a radiative conductivity); the outside film coefficient is the circumferential mean evaluated at each sector's own surface temperature (no windward-to-leeward variation); the flue gas is one well-mixed stream per segment.`,
+        ]
+      : []),
     ...result.assumptions,
   ];
 }
