@@ -44,24 +44,17 @@ export interface Run {
 
 /** Run a scenario: a file path, a scenario object (as parsed from YAML/JSON), or validated model inputs. */
 export function runScenario(scenario: string | Record<string, unknown> | LoadedScenario | ModelInputs, options: SimulateOptions = {}): Run {
-  let inputs: ModelInputs;
-  let description: string | null = null;
-  if (typeof scenario === 'string') {
-    const loaded = loadScenarioFile(scenario);
-    inputs = loaded.inputs;
-    description = loaded.scenario.description ?? null;
-  } else if ('inputs' in scenario && 'scenario' in scenario) {
-    inputs = (scenario as LoadedScenario).inputs;
-    description = (scenario as LoadedScenario).scenario.description ?? null;
-  } else if (Array.isArray((scenario as { layers?: unknown }).layers)) {
-    // validated model inputs carry the layers at the top level (a scenario file nests them under stack)
-    inputs = scenario as unknown as ModelInputs;
-  } else {
-    const loaded = validateScenario(scenario);
-    inputs = loaded.inputs;
-    description = loaded.scenario.description ?? null;
-  }
-  const result = simulate(inputs, options);
+  let loaded: LoadedScenario | null;
+  if (typeof scenario === 'string') loaded = loadScenarioFile(scenario);
+  else if ('inputs' in scenario && 'scenario' in scenario) loaded = scenario as LoadedScenario;
+  // validated model inputs carry the layers at the top level (a scenario file nests them under stack)
+  else if (Array.isArray((scenario as { layers?: unknown }).layers)) loaded = null;
+  else loaded = validateScenario(scenario);
+  const inputs = loaded ? loaded.inputs : (scenario as unknown as ModelInputs);
+  const description = loaded?.scenario.description ?? null;
+  const simulated = simulate(inputs, options);
+  // what validation found odd (e.g. a gas velocity above usual practice) is reported with the run's warnings
+  const result = loaded?.warnings?.length ? { ...simulated, warnings: [...loaded.warnings, ...simulated.warnings] } : simulated;
   const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description });
   return { inputs, result, summary, locations, description };
 }

@@ -99,8 +99,8 @@ export function writeArtefactsAtomically(dir: string, artefacts: readonly Artefa
   try {
     for (const a of artefacts) {
       const tmp = join(dir, `${a.fileName}${tag}`);
+      temps.push(tmp); // before writing: a write that fails half-way (disk full) leaves a file to remove
       writeFileSync(tmp, a.content);
-      temps.push(tmp);
     }
   } catch (e) {
     for (const t of temps) rmSync(t, { force: true });
