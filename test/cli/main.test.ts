@@ -277,6 +277,16 @@ describe('bad options and odd files (exit 2, nothing written)', () => {
   });
 });
 
+describe('warnings of validation', () => {
+  it('check prints them and still exits 0 (a flow of 45 m/s in the demo flue, above the usual 30 m/s)', async () => {
+    // 45 m/s × ρ 0.726 kg/m³ (hand figure for the demo's flue gas at 205 °C) × A 1.5394 m² ≈ 50 kg/s
+    const file = scenarioFile('fast-gas', (s) => (s.flue.schedule.daily[2].mass_flow = s.flue.schedule.daily[3].mass_flow = 50));
+    const r = await runCli(['check', file]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/^  warning: flue\.schedule\.daily\[2\]\.mass_flow: 50\.0 kg\/s at 205 °C .* above the usual 30 m\/s of stacks/m);
+  });
+});
+
 describe('the output folder cannot be written (exit 4, a one-line message naming the path and the cause)', () => {
   async function expectEnvironmentFailure(args: string[], message: RegExp) {
     const r = await runCli(args);

@@ -7,6 +7,7 @@
 import type { ModelInputs } from '../../model/inputs.ts';
 import { buildWallMesh } from '../../physics/wall/mesh.ts';
 import { SECONDS_PER_DAY } from '../../physics/constants.ts';
+import { SERIES_INSTANT_CHANNELS, SERIES_SEGMENT_CHANNELS } from '../../model/timeseries.ts';
 
 export const LIMITS = {
   /** Scenario file size, bytes. A year of per-day schedules with 24 points a day is about 0.5 MB; parsing 1 MB of YAML takes about 2 s and 150 MB. */
@@ -36,7 +37,11 @@ export const LIMITS = {
   nodesPerSegment: 1000,
   /** Unknowns of the ODE system, segments × nodes. 200 × 151 = 30 200 took 7 s a simulated day with the implicit integrator (measured). */
   unknowns: 40_000,
-  /** Recorded temperatures, unknowns × output instants: 320 MB as 8-byte numbers; the 365-day demo at 10-minute output records 1.8e7. */
+  /**
+   * Values a run records, output instants × (unknowns + the boundary quantities of every segment and
+   * instant): 320 MB as 8-byte numbers. The 365-day demo at 10-minute output records 1.5e7, a year
+   * of a 12-segment, 28-node wall 2.5e7.
+   */
   recordedValues: 40_000_000,
   /** Steps the explicit RK45 reference may need (estimated from the stiffness); about a minute on the demo. */
   rk45Steps: 200_000,
@@ -49,6 +54,12 @@ export const grouped = (n: number): string => String(Math.round(n)).replace(/\B(
 export function recordedInstants(inputs: ModelInputs): number {
   const days = inputs.run.length.kind === 'days' ? inputs.run.length.days : 1; // a periodic study records its settled day
   return days * Math.ceil(SECONDS_PER_DAY / inputs.run.outputInterval) + 1;
+}
+
+/** Values recorded at each output instant: every node's temperature, the boundary quantities of each segment, the instant's drivers and firing flag. */
+export function recordedValuesPerInstant(inputs: ModelInputs, nodesPerSegment: number): number {
+  const segments = inputs.stack.segments;
+  return segments * nodesPerSegment + segments * SERIES_SEGMENT_CHANNELS.length + SERIES_INSTANT_CHANNELS.length + 1;
 }
 
 /**
@@ -66,10 +77,11 @@ export function sizeProblems(inputs: ModelInputs): string[] {
       `stack.segments: found ${segments} segments × ${nodes} nodes through the wall = ${grouped(unknowns)} unknowns; expected at most ${grouped(LIMITS.unknowns)} (a limit of stackday): use fewer segments or cells`,
     ];
   const instants = recordedInstants(inputs);
-  const values = unknowns * instants;
+  const perInstant = recordedValuesPerInstant(inputs, nodes);
+  const values = perInstant * instants;
   if (values > LIMITS.recordedValues)
     return [
-      `run.days: found a run recording ${grouped(instants)} output instants × ${grouped(unknowns)} unknowns = ${grouped(values)} temperatures; expected at most ${grouped(LIMITS.recordedValues)} (a limit of stackday, about ${Math.round((LIMITS.recordedValues * 8) / 1e6)} MB): use fewer days, segments or cells, or a longer run.output_interval`,
+      `run.days: found a run recording ${grouped(instants)} output instants × ${grouped(perInstant)} values (${grouped(unknowns)} temperatures and the boundary quantities of ${segments} segments) = ${grouped(values)} values; expected at most ${grouped(LIMITS.recordedValues)} (a limit of stackday, about ${Math.round((LIMITS.recordedValues * 8) / 1e6)} MB): use fewer days, segments or cells, or a longer run.output_interval`,
     ];
   return [];
 }

@@ -6,19 +6,24 @@
 import { describe, it, expect } from 'vitest';
 import { validateModelInputs } from '../../../src/input/scenario/validate.ts';
 import { demoScenario, problemsOf } from './helpers.ts';
-import { recordedInstants, sizeProblems } from '../../../src/input/scenario/limits.ts';
+import { recordedInstants, recordedValuesPerInstant, sizeProblems } from '../../../src/input/scenario/limits.ts';
 import { simulate } from '../../../src/model/simulate.ts';
 
 const demo = demoScenario;
 
-describe('recorded instants, estimated before the run', () => {
-  it('equal the instants a run records (one day at 30-minute output: 49, both ends included)', () => {
+describe('recorded values, estimated before the run', () => {
+  it('equal what a run records: 49 instants for one day at 30-minute output, and every value of them', () => {
     const s = demo();
     s.run.output_interval = 30;
     s.stack.segments = 2;
     const { inputs } = validateModelInputs(s);
     expect(recordedInstants(inputs)).toBe(49);
-    expect(simulate(inputs).series.t.length).toBe(49);
+    const { series } = simulate(inputs);
+    expect(series.t.length).toBe(49);
+    // the limit's count (limits.ts) against the arrays the recorder filled
+    const sum = (arrays: readonly ArrayLike<number>[]) => arrays.reduce((n, a) => n + a.length, 0);
+    const stored = series.temperatureK.length + sum(Object.values(series.segment)) + sum(Object.values(series.instant));
+    expect(stored).toBe(recordedValuesPerInstant(inputs, series.nodes) * 49);
   });
 });
 
@@ -39,7 +44,7 @@ describe('size limits', () => {
     const big = demo();
     big.run.days = 365;
     big.stack.segments = 200;
-    expect(problemsOf(big)[0]).toMatch(/^run\.days: found a run recording 52 561 output instants × [\d ]+ unknowns = [\d ]+ temperatures; expected at most 40 000 000 \(a limit of stackday, about 320 MB\)/);
+    expect(problemsOf(big)[0]).toMatch(/^run\.days: found a run recording 52 561 output instants × [\d ]+ values \([\d ]+ temperatures and the boundary quantities of 200 segments\) = [\d ]+ values; expected at most 40 000 000 \(a limit of stackday, about 320 MB\)/);
     const year = demo();
     year.run.days = 365;
     const { inputs } = validateModelInputs(year);
