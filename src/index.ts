@@ -51,19 +51,20 @@ export interface Run {
 }
 
 /** Validated inputs and description of a scenario given as a file path, a scenario object, a loaded scenario or model inputs. */
-function resolveScenario(scenario: string | Record<string, unknown> | LoadedScenario | ModelInputs): { inputs: ModelInputs; description: string | null } {
-  if (typeof scenario === 'string') {
-    const loaded = loadScenarioFile(scenario);
-    return { inputs: loaded.inputs, description: loaded.scenario.description ?? null };
-  }
-  if ('inputs' in scenario && 'scenario' in scenario) {
-    const loaded = scenario as LoadedScenario;
-    return { inputs: loaded.inputs, description: loaded.scenario.description ?? null };
-  }
+function resolveScenario(scenario: string | Record<string, unknown> | LoadedScenario | ModelInputs): Resolved {
+  const of = (loaded: LoadedScenario): Resolved => ({ inputs: loaded.inputs, description: loaded.scenario.description ?? null, warnings: loaded.warnings ?? [] });
+  if (typeof scenario === 'string') return of(loadScenarioFile(scenario));
+  if ('inputs' in scenario && 'scenario' in scenario) return of(scenario as LoadedScenario);
   // validated model inputs carry the layers at the top level (a scenario file nests them under stack)
-  if (Array.isArray((scenario as { layers?: unknown }).layers)) return { inputs: scenario as unknown as ModelInputs, description: null };
-  const loaded = validateScenario(scenario);
-  return { inputs: loaded.inputs, description: loaded.scenario.description ?? null };
+  if (Array.isArray((scenario as { layers?: unknown }).layers)) return { inputs: scenario as unknown as ModelInputs, description: null, warnings: [] };
+  return of(validateScenario(scenario));
+}
+
+/** A scenario ready to run, with what validation found odd (reported with the run's warnings). */
+interface Resolved {
+  readonly inputs: ModelInputs;
+  readonly description: string | null;
+  readonly warnings: readonly string[];
 }
 
 /**
@@ -75,9 +76,11 @@ export function runScenario(scenario: string | Record<string, unknown> | LoadedS
   return runResolved(resolveScenario(scenario), options);
 }
 
-function runResolved({ inputs, description }: { inputs: ModelInputs; description: string | null }, options: SimulateOptions): Run {
+function runResolved({ inputs, description, warnings }: Resolved, options: SimulateOptions): Run {
   const daily = new DailyExtremes();
-  const result = simulate(inputs, { ...options, sinks: [daily, ...(options.sinks ?? [])] });
+  const simulated = simulate(inputs, { ...options, sinks: [daily, ...(options.sinks ?? [])] });
+  // what validation found odd (e.g. a gas velocity above usual practice) is reported with the run's warnings
+  const result = warnings.length ? { ...simulated, warnings: [...warnings, ...simulated.warnings] } : simulated;
   const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description, daily });
   return { inputs, result, summary, locations, description };
 }

@@ -2,25 +2,36 @@
 /**
  * The `stackday` command: a thin layer over the library (no physics here).
  *
- * Exit codes: 0 the run completed (whatever the verdicts); 2 bad input (scenario, weather file,
- * options, an output folder holding files stackday did not write) or a run that could not be
- * computed — nothing is written (earlier results stay as they were); 3 the run completed, a limit
- * failed and --strict was given.
+ * Exit codes (errors.ts): 0 the run completed (whatever the verdicts); 1 an internal error (a bug);
+ * 2 bad input (scenario, weather file, options, an output folder holding files stackday did
+ * not write) or a run that could not be computed — nothing is
+ * written; 3 the run completed, a limit failed and --strict was given; 4 the environment failed
+ * (the output folder cannot be made or written, a full disk, a file-size limit, memory).
  */
-import { Command, CommanderError, Option } from 'commander';
+import { Command, Option } from 'commander';
 import { resolve, join, dirname } from 'node:path';
-import { ScenarioError } from '../input/scenario/errors.ts';
 import { VERSION } from './version.ts';
+import { BadInput, EXIT_OK, EXIT_LIMIT_FAILED, describeFailure } from './errors.ts';
+import { checkOutputFolder, describeWriteFailure } from '../output/fileErrors.ts';
+import { printable } from '../input/text.ts';
 import type { ScenarioOverride } from '../input/scenario/load.ts';
 
 // Everything else is imported inside the command that needs it (`await import(...)`), so `--version`
 // and `--help` load neither the scenario schema (zod), the model nor the charts (chart.js, canvas).
 
-export const EXIT_OK = 0;
-export const EXIT_BAD_INPUT = 2;
-export const EXIT_LIMIT_FAILED = 3;
+export { EXIT_OK, EXIT_INTERNAL_ERROR, EXIT_BAD_INPUT, EXIT_LIMIT_FAILED, EXIT_ENVIRONMENT } from './errors.ts';
 
-class BadInput extends Error {}
+/** Chart sizes, pixels: each side (a 4000 × 4000 chart is 64 MB of pixels). */
+const CHART_SIDE = { min: 100, max: 4000 };
+
+const EXIT_CODES_HELP = `
+Exit codes:
+  0  the run completed (whatever the verdicts)
+  1  internal error: a bug in stackday (please report it)
+  2  bad input (scenario, weather file, option) or a run that could not be computed; nothing written
+  3  the run completed, a limit failed and --strict was given
+  4  the environment failed: the output folder cannot be made or written (a file in the way, no
+     permission, read-only), the disk is full, a file-size limit, or memory ran out`;
 
 interface RunOptions {
   out?: string;
@@ -36,15 +47,19 @@ interface RunOptions {
 }
 
 function parseChartSize(text: string): { width: number; height: number } {
-  const m = /^(\d{3,4})x(\d{3,4})$/.exec(text);
-  if (!m) throw new BadInput(`--chart-size: found "${text}"; expected WIDTHxHEIGHT in pixels, e.g. 1200x700 (100 to 9999)`);
-  return { width: Number(m[1]), height: Number(m[2]) };
+  const m = /^\s*(\d{1,6})\s*x\s*(\d{1,6})\s*$/i.exec(text);
+  const [width, height] = m ? [Number(m[1]), Number(m[2])] : [Number.NaN, Number.NaN];
+  if (!(width >= CHART_SIDE.min && width <= CHART_SIDE.max && height >= CHART_SIDE.min && height <= CHART_SIDE.max))
+    throw new BadInput(`--chart-size: found "${printable(text)}"; expected WIDTHxHEIGHT in pixels, each from ${CHART_SIDE.min} to ${CHART_SIDE.max}, e.g. 1200x700`);
+  return { width, height };
 }
 
-function parseHeights(text: string): number[] {
-  const values = text.split(',').map((v) => Number(v.trim()));
-  if (values.some((v) => !Number.isFinite(v) || v < 0))
-    throw new BadInput(`--chart-heights: found "${text}"; expected heights in m separated by commas, e.g. 5,20,40`);
+/** Heights in m from `--chart-heights`, each from 0 to the stack height `stackHeightM`. */
+function parseHeights(text: string, stackHeightM: number): number[] {
+  const parts = text.split(',').map((v) => v.trim());
+  const values = parts.map((v) => (/^[+]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(v) ? Number(v) : Number.NaN));
+  if (values.some((v) => !(v >= 0 && v <= stackHeightM)))
+    throw new BadInput(`--chart-heights: found "${printable(text)}"; expected heights in m from 0 to the stack height (${stackHeightM} m), separated by commas, e.g. 5,20,40`);
   return values;
 }
 
@@ -67,17 +82,21 @@ function overridesFrom(raw: unknown, opts: RunOptions, mode: 'cycle' | 'warmup' 
 }
 
 async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmup' | null): Promise<number> {
-  const [{ readScenarioFile, validateModelInputs }, { runToFolder }, { resultSheet }, { SingleBar, Presets }] = await Promise.all([
+  const [{ readScenarioSource, validateModelInputs }, { runToFolder }, { resultSheet }, { SingleBar, Presets }] = await Promise.all([
     import('../input/scenario/load.ts'),
     import('../index.ts'),
     import('../output/console.ts'),
     import('cli-progress'),
   ]);
   const chartSize = parseChartSize(opts.chartSize);
-  const chartHeights = opts.chartHeights === undefined ? undefined : parseHeights(opts.chartHeights);
-  const raw = readScenarioFile(file);
-  const loaded = validateModelInputs(raw, { baseDir: dirname(resolve(file)), file, overrides: overridesFrom(raw, opts, mode) });
+  const { raw, written } = readScenarioSource(file);
+  const loaded = validateModelInputs(raw, { baseDir: dirname(resolve(file)), file, overrides: overridesFrom(raw, opts, mode), written });
+  const chartHeights = opts.chartHeights === undefined ? undefined : parseHeights(opts.chartHeights, loaded.inputs.stack.height);
+  if (opts.out !== undefined && opts.out.trim() === '') throw new BadInput('--out: found ""; expected the path of a folder for the results');
   const outDir = resolve(opts.out ?? join('out', loaded.inputs.name));
+  // an output folder that cannot be written is reported now, not after the run
+  const obstacle = checkOutputFolder(outDir);
+  if (obstacle) throw obstacle;
   const showProgress = !opts.quiet && process.stderr.isTTY;
   // the bar starts with the first progress report, after any notice about the size of the files
   const bar = showProgress ? new SingleBar({ format: 'simulating |{bar}| {percentage}% ', stream: process.stderr, hideCursor: true }, Presets.shades_classic) : null;
@@ -104,6 +123,9 @@ async function runCommand(file: string, opts: RunOptions, mode: 'cycle' | 'warmu
         } else bar?.update(pct);
       },
     }));
+  } catch (e) {
+    // a file-system failure while writing the results names the path and the cause (exit 4)
+    throw describeWriteFailure(e, outDir);
   } finally {
     if (barStarted) bar?.stop();
   }
@@ -138,6 +160,7 @@ export function buildProgram(): Command {
     .description('Simulate the layered wall of a tall stack through the day: temperatures of every layer, dew-point margins, peaks and verdicts.')
     .version(VERSION, '-V, --version')
     .showHelpAfterError('(run with --help for usage)')
+    .addHelpText('after', EXIT_CODES_HELP)
     .exitOverride();
 
   addRunOptions(program.command('run').argument('<scenario>', 'scenario file (YAML or JSON)').description('run a scenario (daily cycle or warm-up, as the file says) and write the results')).action(
@@ -171,13 +194,20 @@ export function buildProgram(): Command {
       ]);
       // validate every file before running any: bad input anywhere means nothing runs and nothing is written
       const loaded = files.map((f) => loadScenarioFile(f));
+      const outDir = opts.out === undefined ? undefined : resolve(opts.out);
+      const obstacle = outDir === undefined ? null : checkOutputFolder(outDir);
+      if (obstacle) throw obstacle;
       const runs = loaded.map((l) => runScenario(l));
       const comparison = compareBuildUps(runs.map((r) => r.summary));
-      if (opts.out) {
-        writeArtefactsAtomically(resolve(opts.out), [
-          { fileName: 'comparison.json', content: `${JSON.stringify(comparison, null, 2)}\n` },
-          { fileName: 'comparison.csv', content: comparisonCsv(comparison) },
-        ]);
+      if (outDir !== undefined) {
+        try {
+          writeArtefactsAtomically(outDir, [
+            { fileName: 'comparison.json', content: `${JSON.stringify(comparison, null, 2)}\n` },
+            { fileName: 'comparison.csv', content: comparisonCsv(comparison) },
+          ]);
+        } catch (e) {
+          throw describeWriteFailure(e, outDir);
+        }
       }
       if (opts.json) process.stdout.write(`${JSON.stringify(comparison, null, 2)}\n`);
       else process.stdout.write(`${comparisonSheet(comparison, runs[0]!.summary.cautions).join('\n')}\n`);
@@ -191,6 +221,7 @@ export function buildProgram(): Command {
       const { loadScenarioFile } = await import('../input/scenario/load.ts');
       const loaded = loadScenarioFile(file);
       process.stdout.write(`${file}: valid scenario "${loaded.inputs.name}" (${loaded.inputs.layers.length} layers, ${loaded.inputs.stack.segments} segments)\n`);
+      for (const w of loaded.warnings) process.stdout.write(`  warning: ${w}\n`);
     });
   program
     .command('schema')
@@ -213,40 +244,20 @@ export function buildProgram(): Command {
       const rows = describeMaterialsTable();
       process.stdout.write(`${table(rows).join('\n')}\n`);
     });
+  for (const name of ['run', 'warmup', 'compare', 'check']) program.commands.find((c) => c.name() === name)?.addHelpText('after', EXIT_CODES_HELP);
   return program;
 }
 
-/** Run the command line; returns the exit code. Errors become one clear message each, never a stack trace. */
+/** Run the command line; returns the exit code. Errors become one clear message each (errors.ts), never a stack trace but for a bug. */
 export async function main(argv: readonly string[]): Promise<number> {
   const program = buildProgram();
   try {
     await program.parseAsync(argv as string[], { from: 'user' });
     return typeof process.exitCode === 'number' ? process.exitCode : EXIT_OK;
   } catch (e) {
-    if (e instanceof CommanderError) {
-      if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help') return EXIT_OK;
-      return EXIT_BAD_INPUT; // commander has printed its message
-    }
-    if (e instanceof ScenarioError) {
-      process.stderr.write(`stackday: ${e.message}\n`);
-      return EXIT_BAD_INPUT;
-    }
-    if (e instanceof BadInput) {
-      process.stderr.write(`stackday: ${e.message}\n`);
-      return EXIT_BAD_INPUT;
-    }
-    const { OutputFolderError } = await import('../output/folder.ts');
-    if (e instanceof OutputFolderError) {
-      process.stderr.write(`stackday: ${e.message}\nNothing was written.\n`);
-      return EXIT_BAD_INPUT;
-    }
-    const { SimulationError } = await import('../model/simulate.ts');
-    if (e instanceof SimulationError) {
-      process.stderr.write(`stackday: the run could not be computed: ${e.message}\nNothing was written. Check the scenario for extreme values, or tighten run.relative_tolerance.\n`);
-      return EXIT_BAD_INPUT;
-    }
-    process.stderr.write(`stackday: unexpected error: ${(e as Error).message ?? String(e)}\n`);
-    return 1;
+    const failure = describeFailure(e);
+    if (failure.message !== null) process.stderr.write(`stackday: ${failure.message}\n`);
+    return failure.code;
   }
 }
 

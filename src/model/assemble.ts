@@ -40,6 +40,11 @@ function windFactors(inputs: ModelInputs, referenceHeightM: number, midHeight: F
   );
 }
 
+/** Properties of the flue gas at a temperature, as the run uses them: `properties: air` reads the same air table as the outside film. */
+export function flueGasPropertyLookup(inputs: ModelInputs): GasPropertyLookup {
+  return inputs.flue.properties === 'air' ? makeAirGasPropertyLookup(inputs.flue.pressurePa) : makeGasPropertyTable(inputs.flue.composition, inputs.flue.pressurePa);
+}
+
 /** Build the mesh, the drivers and the ODE system for the inputs. */
 export function assembleModel(inputs: ModelInputs): AssembledModel {
   const clock = makeSiteClock(inputs.site.timeZone, inputs.site.startDate);
@@ -58,8 +63,7 @@ export function assembleModel(inputs: ModelInputs): AssembledModel {
     outerDiameter: 2 * mesh.outerRadius,
   };
   const schedule = makeFiringSchedule({ ...inputs.flue.schedule, offMassFlow: inputs.flue.offMassFlow });
-  // `properties: air` reads the same air table as the outside film
-  const gas = inputs.flue.properties === 'air' ? makeAirGasPropertyLookup(inputs.flue.pressurePa) : makeGasPropertyTable(inputs.flue.composition, inputs.flue.pressurePa);
+  const gas = flueGasPropertyLookup(inputs);
   const ctx: DriverContext = {
     inputs,
     clock,

@@ -31,16 +31,44 @@ export interface SiteClock {
 
 const DATE_RE = /^(\d{4})-(\d{2})-(\d{2})$/;
 
+/**
+ * The dates a run may use (first day, weather-file times), inclusive. Meeus's low-precision solar
+ * coordinates behind the sun position (physics/sun/position.ts) are accurate to about 0.01° within
+ * a few centuries of J2000, and these years keep well inside that while covering every plant record
+ * and design year; JavaScript's `Date.UTC` also reads years 0–99 as 1900–1999, which a lower bound
+ * of 1900 makes harmless.
+ */
+export const EARLIEST_DATE = '1900-01-01';
+export const LATEST_DATE = '2199-12-31';
+/** Words for messages: `a calendar date "YYYY-MM-DD" from 1900-01-01 to 2199-12-31`. */
+export const CALENDAR_DATE_WORDING = `a calendar date "YYYY-MM-DD" from ${EARLIEST_DATE} to ${LATEST_DATE}`;
+
+/**
+ * Year, month (1–12) and day of a date of the Gregorian calendar within EARLIEST_DATE…LATEST_DATE,
+ * or null (2026-13-01, 2026-00-10, 0000-01-10 and 2026-02-30 are all null).
+ */
+export function calendarDate(year: number, month: number, day: number): { year: number; month: number; day: number } | null {
+  if (![year, month, day].every(Number.isInteger) || year < 1900 || year > 2199 || month < 1 || month > 12 || day < 1) return null;
+  const t = new Date(Date.UTC(year, month - 1, day));
+  return t.getUTCFullYear() === year && t.getUTCMonth() === month - 1 && t.getUTCDate() === day ? { year, month, day } : null;
+}
+
+/** A `YYYY-MM-DD` text read by {@link calendarDate}, or null. Example: parseCalendarDate('2026-02-28') → { year: 2026, month: 2, day: 28 }. */
+export function parseCalendarDate(text: string): { year: number; month: number; day: number } | null {
+  const m = DATE_RE.exec(text);
+  return m ? calendarDate(Number(m[1]), Number(m[2]), Number(m[3])) : null;
+}
+
 /** Build the clock of a site. Throws a RangeError with a plain message for a bad zone or date. */
 export function makeSiteClock(timeZone: string, startDate: string): SiteClock {
-  const m = DATE_RE.exec(startDate);
-  if (!m) throw new RangeError(`start date "${startDate}" is not of the form YYYY-MM-DD`);
+  const date = parseCalendarDate(startDate);
+  if (!date) throw new RangeError(`start date "${startDate}" is not ${CALENDAR_DATE_WORDING}`);
   if (!isValidTimeZone(timeZone)) throw new RangeError(`time zone "${timeZone}" is not a known IANA zone (e.g. Europe/Oslo, America/Chicago, UTC)`);
-  const [y, mo, d] = [Number(m[1]), Number(m[2]) - 1, Number(m[3])];
+  const [y, mo, d] = [date.year, date.month - 1, date.day];
   const start = new TZDate(y, mo, d, 0, 0, 0, timeZone);
   const startUtcMs = start.getTime();
-  if (!Number.isFinite(startUtcMs) || y < 100 || start.getFullYear() !== y || start.getMonth() !== mo || start.getDate() !== d)
-    throw new RangeError(`start date "${startDate}" is not a calendar date`);
+  if (!Number.isFinite(startUtcMs) || start.getFullYear() !== y || start.getMonth() !== mo || start.getDate() !== d)
+    throw new RangeError(`start date "${startDate}" is not ${CALENDAR_DATE_WORDING}`);
 
   // UTC offsets change only at whole quarter hours of UTC in every zone of the tz database, and at
   // most a few times a year. The time-zone lookup is costly, so: per UTC day, the offsets at its

@@ -10,6 +10,7 @@ import { integrateTrBdf2 } from './trbdf2.ts';
 export { integrateDormandPrince } from './dormandPrince.ts';
 export { integrateTrBdf2 } from './trbdf2.ts';
 export { solveTridiagonal } from './tridiagonal.ts';
+export { gershgorinSpectralBound, stabilityLimitedSteps, DORMAND_PRINCE_REAL_STABILITY_LIMIT } from './stiffness.ts';
 export { IntegrationError } from './types.ts';
 export type {
   DenseOutput,

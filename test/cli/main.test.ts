@@ -234,3 +234,102 @@ describe('command-line overrides go through the one validation path', () => {
     await expectBadInput(['run', scenarioFile('days-bad'), '--days', 'forever'], /--days \(run\.days\): found "forever"/);
   });
 });
+
+describe('bad options and odd files (exit 2, nothing written)', () => {
+  it('--chart-heights "" is not 0 m', async () => {
+    await expectBadInput(['run', scenarioFile('heights-empty'), '--chart-heights', ''], /--chart-heights: found ""; expected heights in m from 0 to the stack height \(45 m\), separated by commas/);
+  });
+
+  it('--chart-heights above the stack, or not numbers', async () => {
+    await expectBadInput(['run', scenarioFile('heights-high'), '--chart-heights', '5,500'], /--chart-heights: found "5,500"/);
+    await expectBadInput(['run', scenarioFile('heights-text'), '--chart-heights', '5,,20'], /--chart-heights: found "5,,20"/);
+  });
+
+  it('--chart-size beyond 4000 pixels a side', async () => {
+    await expectBadInput(['run', scenarioFile('size-big'), '--chart-size', '9999x9999'], /--chart-size: found "9999x9999"; expected WIDTHxHEIGHT in pixels, each from 100 to 4000/);
+  });
+
+  it('an impossible first day', async () => {
+    await expectBadInput(['run', scenarioFile('date-13', (s) => (s.site.first_day = '2026-13-01'))], /site\.first_day: found "2026-13-01"; expected a calendar date "YYYY-MM-DD" from 1900-01-01 to 2199-12-31/);
+  });
+
+  it('a scenario name too long to name a folder', async () => {
+    await expectBadInput(['run', scenarioFile('long-name', (s) => (s.name = 'n'.repeat(300)))], /^\s+name: found "n+…" \(300 characters\); expected a name of 1 to 100/m);
+  });
+
+  it('64 kB of random bytes as a scenario: a short, printable summary', async () => {
+    const file = join(dir, 'random.yaml');
+    const bytes = Buffer.alloc(65536);
+    let x = 1;
+    for (let i = 0; i < bytes.length; i++) bytes[i] = (x = (Math.imul(x, 1664525) + 1013904223) >>> 0) >>> 24; // repeatable LCG (Numerical Recipes constants)
+    writeFileSync(file, bytes);
+    const r = await expectBadInput(['run', file], /it is not text: 65536 bytes/);
+    expect(r.stderr.length).toBeLessThan(400);
+    expect(r.stderr).toMatch(/^[\x20-\x7e\n]*$/);
+  });
+
+  it('a JSON scenario with a byte-order mark and terrain "flat" checks out', async () => {
+    const file = join(dir, 'bom-flat.json');
+    writeFileSync(file, `\ufeff${JSON.stringify({ ...demo, site: { ...demo.site, terrain: 'flat' } })}`);
+    const r = await runCli(['check', file]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/valid scenario "demo"/);
+  });
+});
+
+describe('warnings of validation', () => {
+  it('check prints them and still exits 0 (a flow of 45 m/s in the demo flue, above the usual 30 m/s)', async () => {
+    // 45 m/s × ρ 0.726 kg/m³ (hand figure for the demo's flue gas at 205 °C) × A 1.5394 m² ≈ 50 kg/s
+    const file = scenarioFile('fast-gas', (s) => (s.flue.schedule.daily[2].mass_flow = s.flue.schedule.daily[3].mass_flow = 50));
+    const r = await runCli(['check', file]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/^  warning: flue\.schedule\.daily\[2\]\.mass_flow: 50\.0 kg\/s at 205 °C .* above the usual 30 m\/s of stacks/m);
+  });
+});
+
+describe('the output folder cannot be written (exit 4, a one-line message naming the path and the cause)', () => {
+  async function expectEnvironmentFailure(args: string[], message: RegExp) {
+    const r = await runCli(args);
+    expect(r.code).toBe(4);
+    expect(r.stderr).toMatch(message);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    expect(r.stderr).not.toMatch(/unexpected|internal error|\n\s+at /);
+    return r;
+  }
+
+  it('a file in the way of the folder, reported before the run', async () => {
+    const file = join(dir, 'a-file');
+    writeFileSync(file, 'keep me');
+    const started = performance.now();
+    await expectEnvironmentFailure(['run', scenarioFile('obstacle-file'), '--out', file, '--no-charts', '--quiet'], new RegExp(`cannot write "${file}": it is a file, not a folder \\(ENOTDIR\\); the results were not written`));
+    expect(performance.now() - started).toBeLessThan(3000); // up front: the run itself takes longer (generous for a shared machine)
+    expect(readFileSync(file, 'utf8')).toBe('keep me');
+  });
+
+  it('a folder asked for under a file', async () => {
+    const file = join(dir, 'another-file');
+    writeFileSync(file, 'keep me');
+    await expectEnvironmentFailure(['run', scenarioFile('obstacle-under'), '--out', join(file, 'sub', 'out'), '--no-charts', '--quiet'], new RegExp(`cannot write "${file}": it is a file, where a folder is needed`));
+  });
+
+  it('a target file that is a folder', async () => {
+    // the results folder is swapped in whole, so a folder that holds anything stackday did not write
+    // (here a folder where summary.json goes) is refused before the run, and left as it was
+    const out = join(dir, 'target-folder');
+    mkdirSync(join(out, 'summary.json'), { recursive: true });
+    await expectEnvironmentFailure(['run', scenarioFile('obstacle-target'), '--out', out, '--no-charts', '--quiet'], new RegExp(`output folder "${out}" .*summary\\.json`));
+    expect(readdirSync(join(out, 'summary.json'))).toEqual([]); // the folder in the way is left as it was
+  });
+
+  it('a folder name too long for the file system (255 bytes on common file systems)', async () => {
+    await expectEnvironmentFailure(['run', scenarioFile('obstacle-long'), '--out', join(dir, 'x'.repeat(300)), '--no-charts', '--quiet'], /a name in the path is too long for the file system \(ENAMETOOLONG\)/);
+  });
+
+  it('compare --out a file', async () => {
+    const file = join(dir, 'cmp-file');
+    writeFileSync(file, 'keep me');
+    const a = scenarioFile('cmp-env-a', (s) => (s.name = 'cmp-env-a'));
+    const b = scenarioFile('cmp-env-b', (s) => (s.name = 'cmp-env-b'));
+    await expectEnvironmentFailure(['compare', a, b, '--out', file], /it is a file, not a folder \(ENOTDIR\)/);
+  });
+});

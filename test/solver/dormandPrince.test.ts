@@ -7,6 +7,7 @@ import {
   integrateTrBdf2,
   type OdeSystem,
 } from '../../src/solver/index.ts';
+import { heatEquation } from './fixtures.ts';
 
 /**
  * The odex reference solver (devDependency). Loaded through `require` with the small typed surface
@@ -31,29 +32,6 @@ const vanDerPol: OdeSystem = {
     dydt[1] = MU * (1 - y[0] * y[0]) * y[1] - y[0];
   },
 };
-
-/**
- * 1-D heat equation u_t = u_xx on (0, 1), u = 0 at both ends, N interior nodes, central
- * differences (see trbdf2.test.ts); stiff for large N (largest eigenvalue ≈ 4/Δx²).
- */
-function heatEquation(nodes: number): OdeSystem {
-  const dx = 1 / (nodes + 1);
-  const c = 1 / (dx * dx);
-  return {
-    size: nodes,
-    auxSize: 0,
-    rhs(_t, y, dydt) {
-      for (let i = 0; i < nodes; i++) {
-        dydt[i] = c * ((i > 0 ? y[i - 1] : 0) - 2 * y[i] + (i < nodes - 1 ? y[i + 1] : 0));
-      }
-    },
-    jacobian(_t, _y, lower, diag, upper) {
-      lower.fill(c);
-      upper.fill(c);
-      diag.fill(-2 * c);
-    },
-  };
-}
 
 /** Scalar y' = −y with the quadrature rate aux = y (∫₀ᵗ y dt = 1 − e^{−t} for y(0) = 1). */
 const decayWithQuadrature: OdeSystem = {

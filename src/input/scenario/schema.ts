@@ -5,12 +5,14 @@
  */
 import { z } from 'zod';
 import { parseQuantity, parseClockTime, describeExpected, QUANTITY_KINDS, type QuantityKindName } from './units.ts';
+import { KELVIN_OFFSET } from '../../physics/constants.ts';
 import { findMaterial, suggestMaterial } from '../../physics/materials/index.ts';
 import { FUELS } from '../../physics/flue/fuels.ts';
-import { isValidTimeZone } from '../../model/clock.ts';
+import { isValidTimeZone, parseCalendarDate, CALENDAR_DATE_WORDING } from '../../model/clock.ts';
 import { TERRAIN_EXPONENTS, type Terrain } from '../../physics/outside/wind.ts';
 import { SKY_MODELS, type SkyModelName } from '../../physics/outside/boundary.ts';
 import { INTEGRATORS, type IntegratorName } from '../../solver/index.ts';
+import { LIMITS } from './limits.ts';
 
 interface Bounds {
   /** Smallest allowed SI value (inclusive unless `exclusiveMin`). */
@@ -21,25 +23,22 @@ interface Bounds {
   readonly wording?: string;
 }
 
-const show = (v: unknown) => (typeof v === 'string' ? `"${v}"` : JSON.stringify(v));
+// Messages below start with "expected …": errors.ts puts the path and the value found (as written) in front.
 
-/** A value with a unit; output is the SI number. */
+/** A value with a unit; output is the SI number. Every message names the quantity, its unit and its range. */
 export function quantity(kind: QuantityKindName, bounds: Bounds = {}, description?: string) {
   const k = QUANTITY_KINDS[kind];
-  const input = z.union([z.number(), z.string()]).meta({
+  const expected = `expected ${describeExpected(kind, bounds.wording)}`;
+  const input = z.union([z.number(), z.string()], { error: () => expected }).meta({
     description: `${description ? `${description}. ` : ''}${k.what[0]!.toUpperCase()}${k.what.slice(1)}: a plain number in ${k.plainUnit}, or a string with a unit.`,
   });
   return input.transform((v, ctx) => {
     const parsed = parseQuantity(v, kind);
-    if (!parsed.ok) {
-      ctx.addIssue({ code: 'custom', message: `found ${show(v)}; expected ${parsed.expected}` });
-      return z.NEVER;
-    }
-    const x = parsed.value;
+    const x = parsed.ok ? parsed.value : Number.NaN;
     const low = bounds.min !== undefined && (bounds.exclusiveMin ? x <= bounds.min : x < bounds.min);
     const high = bounds.max !== undefined && x > bounds.max;
-    if (low || high) {
-      ctx.addIssue({ code: 'custom', message: `found ${show(v)}; expected ${describeExpected(kind, bounds.wording)}` });
+    if (!parsed.ok || low || high) {
+      ctx.addIssue({ code: 'custom', message: expected });
       return z.NEVER;
     }
     return x;
@@ -48,116 +47,172 @@ export function quantity(kind: QuantityKindName, bounds: Bounds = {}, descriptio
 
 /** A dimensionless number with bounds. */
 function ratio(min: number, max: number, what: string, description: string) {
-  return z.number().meta({ description: `${description} (${what}, ${min} to ${max}).` }).check((ctx) => {
-    const v = ctx.value;
-    if (!(v >= min && v <= max)) ctx.issues.push({ code: 'custom', input: v, message: `found ${show(v)}; expected ${what} between ${min} and ${max}` });
-  });
+  const expected = `expected ${what} between ${min} and ${max}`;
+  return z
+    .number({ error: () => expected })
+    .meta({ description: `${description} (${what}, ${min} to ${max}).` })
+    .check((ctx) => {
+      const v = ctx.value;
+      if (!(v >= min && v <= max)) ctx.issues.push({ code: 'custom', input: v, message: expected });
+    });
 }
 
-function count(min: number, max: number, description: string) {
-  return z.number().meta({ description: `${description} (whole number, ${min} to ${max}).` }).check((ctx) => {
-    const v = ctx.value;
-    if (!(Number.isInteger(v) && v >= min && v <= max)) ctx.issues.push({ code: 'custom', input: v, message: `found ${show(v)}; expected a whole number from ${min} to ${max}` });
-  });
+/** Words for a whole number in a range: `a whole number from 1 to 200 (cells across the layer)`. */
+const wholeNumber = (min: number, max: number, what: string) => `a whole number from ${min} to ${max} (${what})`;
+
+function count(min: number, max: number, what: string, description: string) {
+  const expected = `expected ${wholeNumber(min, max, what)}`;
+  return z
+    .number({ error: () => expected })
+    .meta({ description: `${description} (whole number, ${min} to ${max}).` })
+    .check((ctx) => {
+      const v = ctx.value;
+      if (!(Number.isInteger(v) && v >= min && v <= max)) ctx.issues.push({ code: 'custom', input: v, message: expected });
+    });
 }
 
 /** Twelve dimensionless monthly values within [min, max]. */
 function monthly(description: string, min: number, max: number) {
   return z
-    .array(ratio(min, max, 'an optical depth', description))
-    .length(12, 'expected 12 values, January to December')
+    .array(ratio(min, max, 'an optical depth', description), { error: () => `expected a list of 12 values from ${min} to ${max}, January to December` })
+    .length(12, `expected 12 values from ${min} to ${max}, January to December`)
     .meta({ description: `${description}: 12 values, January to December.` });
 }
 
+const CLOCK_TIME_WORDING = 'expected a local clock time "HH:MM" from 00:00 to 24:00 (in quotes in YAML)';
 const clockTime = z
-  .string()
+  .string({ error: () => CLOCK_TIME_WORDING })
   .meta({ description: 'Local clock time, "HH:MM" (00:00 to 24:00).' })
   .transform((v, ctx) => {
     const s = parseClockTime(v);
     if (s === null) {
-      ctx.addIssue({ code: 'custom', message: `found ${show(v)}; expected a local clock time "HH:MM" from 00:00 to 24:00` });
+      ctx.addIssue({ code: 'custom', message: CLOCK_TIME_WORDING });
       return z.NEVER;
     }
     return s;
   });
 
-const ABSOLUTE_ZERO_WORDING = 'a temperature above absolute zero';
-const temperature = (description: string) => quantity('temperature', { min: 0, exclusiveMin: true, wording: ABSOLUTE_ZERO_WORDING }, description);
+/** A temperature from `minC` to `maxC` °C (plain numbers are °C). `what`: "a gas temperature". */
+const temperature = (minC: number, maxC: number, what: string, description: string) =>
+  quantity('temperature', { min: minC + KELVIN_OFFSET, max: maxC + KELVIN_OFFSET, wording: `${what} from ${minC} °C to ${maxC} °C` }, description);
+/** Outside air and dew points: the range weather files accept (input/weather/csvFile.ts). */
+const airTemperature = (description: string) => temperature(-90, 60, 'an air temperature', description);
+/** Ground and surroundings: outdoor surfaces, up to a sun-baked roof. */
+const surroundingsTemperature = (description: string) => temperature(-90, 100, 'a temperature', description);
+/** Limits and material service temperatures: from 0 °C to beyond any refractory. */
+const limitTemperature = (description: string) => temperature(0, 2500, 'a temperature limit', description);
 const positiveLength = (description: string) => quantity('length', { min: 0, exclusiveMin: true, wording: 'a positive length' }, description);
+/** Control characters (but tab and line breaks): text with them would garble the terminal and the reports. */
+const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f]/;
+/** Non-empty printable text. */
+const text = (what: string) =>
+  z
+    .string({ error: () => `expected ${what} (text)` })
+    .min(1, `expected ${what} (text, not empty)`)
+    .refine((v) => !CONTROL.test(v), `expected ${what} (text without control characters)`);
+
+const TIME_ZONE_WORDING = 'expected an IANA time zone such as "Europe/Oslo", "America/Chicago" or "UTC"';
+const TERRAINS = Object.keys(TERRAIN_EXPONENTS) as [Terrain, ...Terrain[]];
+/** Every allowed text of a choice, for messages: `"flat", "open", "suburban" or "city"`. */
+const choices = (names: readonly string[]) => names.map((n) => `"${n}"`).join(', ').replace(/, ([^,]*)$/, ' or $1');
 
 const site = z.strictObject({
-  name: z.string().min(1).meta({ description: 'Name of the site, for reports.' }),
+  name: text('the name of the site').meta({ description: 'Name of the site, for reports.' }),
   latitude: ratio(-90, 90, 'degrees north', 'Latitude, degrees north (negative south)'),
   longitude: ratio(-180, 180, 'degrees east', 'Longitude, degrees east (negative west)'),
   elevation: quantity('length', { min: -500, max: 9000, wording: 'an elevation between -500 m and 9000 m' }, 'Elevation above sea level').prefault(0),
   pressure: quantity('pressure', { min: 30_000, max: 110_000, wording: 'a pressure from 30 kPa to 110 kPa' }, 'Atmospheric pressure at the site (default: the standard atmosphere at the elevation)').optional(),
   time_zone: z
-    .string()
+    .string({ error: () => TIME_ZONE_WORDING })
     .meta({ description: 'IANA time zone of the site, e.g. "Europe/Oslo".' })
     .check((ctx) => {
-      if (!isValidTimeZone(ctx.value))
-        ctx.issues.push({ code: 'custom', input: ctx.value, message: `found "${ctx.value}"; expected an IANA time zone such as "Europe/Oslo" or "America/Chicago"` });
+      if (!isValidTimeZone(ctx.value)) ctx.issues.push({ code: 'custom', input: ctx.value, message: TIME_ZONE_WORDING });
     }),
-  first_day: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'expected a date "YYYY-MM-DD"').meta({ description: 'First simulated day, local date "YYYY-MM-DD".' }),
+  first_day: z
+    .string({ error: () => `expected ${CALENDAR_DATE_WORDING}` })
+    .meta({ description: `First simulated day, local date "YYYY-MM-DD" (${CALENDAR_DATE_WORDING.replace(/^a calendar date "YYYY-MM-DD" /, '')}).` })
+    .check((ctx) => {
+      if (!parseCalendarDate(ctx.value)) ctx.issues.push({ code: 'custom', input: ctx.value, message: `expected ${CALENDAR_DATE_WORDING}` });
+    }),
   ground_reflectance: ratio(0, 1, 'a fraction', 'Solar reflectance (albedo) of the ground around the stack').default(0.2),
   terrain: z
-    .union([z.enum(Object.keys(TERRAIN_EXPONENTS) as [Terrain, ...Terrain[]]), ratio(0.05, 0.6, 'a power-law exponent', 'Wind power-law exponent')])
+    .union([z.enum(TERRAINS), ratio(0.05, 0.6, 'a power-law exponent', 'Wind power-law exponent')], {
+      error: () => `expected one of ${choices(TERRAINS)}, or a power-law exponent between 0.05 and 0.6`,
+    })
     .default('suburban')
     .meta({
       description: `Terrain around the stack for the wind profile: ${Object.keys(TERRAIN_EXPONENTS).join(', ')} (the station's reading is converted by the two-terrain power law), or a power-law exponent applied to the reading directly.`,
     }),
 });
 
-const propertyTable = (kind: 'conductivity' | 'specificHeat', description: string) =>
-  z.union([
-    quantity(kind, { min: 0, exclusiveMin: true, wording: 'a positive value' }, description),
-    z
-      .array(z.tuple([z.number(), z.number()]))
-      .min(1)
-      .meta({ description: `${description}: table of [temperature in °C, value in ${QUANTITY_KINDS[kind].plainUnit}] pairs, temperatures increasing.` }),
-  ]);
+const propertyTable = (kind: 'conductivity' | 'specificHeat', description: string) => {
+  const unit = QUANTITY_KINDS[kind].plainUnit;
+  const what = QUANTITY_KINDS[kind].what;
+  return z.union(
+    [
+      quantity(kind, { min: 0, exclusiveMin: true, wording: `a positive ${what.replace(/^an? /, '')}` }, description),
+      z
+        .array(z.tuple([z.number({ error: () => 'expected a temperature in °C' }), z.number({ error: () => `expected ${what} in ${unit}` })], { error: () => `expected a pair [temperature in °C, value in ${unit}]` }))
+        .min(1, `expected at least one pair [temperature in °C, value in ${unit}]`)
+        .meta({ description: `${description}: table of [temperature in °C, value in ${unit}] pairs, temperatures increasing.` }),
+    ],
+    { error: () => `expected ${what}: a positive plain number in ${unit}, a string with a unit, or a table of [temperature in °C, value in ${unit}] pairs` },
+  );
+};
 
 const inlineMaterial = z.strictObject({
-  name: z.string().min(1).meta({ description: 'Name for reports.' }),
+  name: text('a name for the material').meta({ description: 'Name for reports.' }),
   density: quantity('density', { min: 0, exclusiveMin: true, wording: 'a positive density' }, 'Density'),
   conductivity: propertyTable('conductivity', 'Thermal conductivity'),
   specific_heat: propertyTable('specificHeat', 'Specific heat'),
   emissivity: ratio(0, 1, 'a fraction', 'Surface emissivity').default(0.9),
-  max_service_temperature: temperature('Maximum service temperature'),
+  max_service_temperature: limitTemperature('Maximum service temperature'),
   youngs_modulus: quantity('stress', { min: 0, exclusiveMin: true, wording: 'a positive modulus' }, "Young's modulus").optional(),
-  thermal_expansion: z.number().positive().meta({ description: 'Linear thermal expansion coefficient, 1/K.' }).optional(),
+  thermal_expansion: ratio(0, 1e-4, 'a linear expansion coefficient in 1/K', 'Linear thermal expansion coefficient, 1/K').optional(),
   poisson_ratio: ratio(0, 0.5, 'a ratio', "Poisson's ratio").optional(),
   source: z.string().default('user data').meta({ description: 'Where the numbers come from.' }),
 });
 
 const layer = z.strictObject({
-  label: z.string().min(1).optional().meta({ description: 'Label for reports, e.g. "liner". Default: the material name.' }),
-  material: z.union([
-    z
-      .string()
-      .meta({ description: 'Name of a material in the library (`stackday materials`).' })
-      .check((ctx) => {
-        if (findMaterial(ctx.value)) return;
-        const hint = suggestMaterial(ctx.value);
-        ctx.issues.push({
-          code: 'custom',
-          input: ctx.value,
-          message: `found "${ctx.value}"; expected a material from the library${hint ? ` (did you mean "${hint}"?)` : ''}; \`stackday materials\` lists them`,
-        });
-      }),
-    inlineMaterial,
-  ]),
+  label: text('a label for the layer').optional().meta({ description: 'Label for reports, e.g. "liner". Default: the material name.' }),
+  material: z.union(
+    [
+      z
+        .string()
+        .meta({ description: 'Name of a material in the library (`stackday materials`).' })
+        .check((ctx) => {
+          if (findMaterial(ctx.value)) return;
+          const hint = suggestMaterial(ctx.value);
+          ctx.issues.push({
+            code: 'custom',
+            input: ctx.value,
+            message: `expected a material from the library${hint ? ` (did you mean "${hint}"?)` : ''}; \`stackday materials\` lists them`,
+          });
+        }),
+      inlineMaterial,
+    ],
+    // a name that is not in the library is reported by its own branch, with a suggestion
+    { error: (iss) => (typeof iss.input === 'string' ? undefined : 'expected the name of a material from the library (`stackday materials`) or an inline material section') },
+  ),
   thickness: positiveLength('Layer thickness'),
-  cells: z.union([z.literal('auto'), count(1, 200, 'Finite-volume cells across the layer')]).default('auto'),
+  cells: z
+    .union([z.literal('auto'), count(1, LIMITS.cellsPerLayer, 'cells across the layer', 'Finite-volume cells across the layer')], {
+      error: () => `expected "auto" or ${wholeNumber(1, LIMITS.cellsPerLayer, 'cells across the layer')}`,
+    })
+    .default('auto'),
   contact_resistance: quantity('contactResistance', { min: 0, wording: 'a contact resistance of zero or more' }, 'Contact resistance to the next layer outward').prefault(0),
 });
 
 const stack = z.strictObject({
   height: quantity('length', { min: 0, exclusiveMin: true, max: 500, wording: 'a height above 0 m and up to 500 m' }, 'Height of the stack above its base'),
   inner_diameter: quantity('length', { min: 0.05, max: 30, wording: 'a diameter from 0.05 m to 30 m' }, 'Inner (flue) diameter'),
-  segments: count(1, 200, 'Axial segments the height is cut into').default(12),
-  sectors: count(1, 72, 'Circumferential sectors of the wall: 1 averages the sun round the circumference; 8 to 36 resolve the sun-facing side').default(1),
-  layers: z.array(layer).min(1).meta({ description: 'Wall layers from the flue side outward.' }),
+  segments: count(1, LIMITS.segments, 'axial segments', 'Axial segments the height is cut into').default(12),
+  sectors: count(1, 72, 'circumferential sectors', 'Circumferential sectors of the wall: 1 averages the sun round the circumference; 8 to 36 resolve the sun-facing side').default(1),
+  layers: z
+    .array(layer, { error: () => 'expected a list of wall layers, from the flue side outward' })
+    .min(1, `expected a list of 1 to ${LIMITS.layers} wall layers`)
+    .max(LIMITS.layers, `expected at most ${LIMITS.layers} wall layers (a limit of stackday)`)
+    .meta({ description: `Wall layers from the flue side outward (1 to ${LIMITS.layers}).` }),
 });
 
 const surface = z.strictObject({
@@ -167,42 +222,49 @@ const surface = z.strictObject({
 
 const outside = z.strictObject({
   film_coefficient: z
-    .union([z.literal('auto'), quantity('filmCoefficient', { min: 0, exclusiveMin: true, wording: 'a positive film coefficient' }, 'Fixed outside film coefficient')])
+    .union([z.literal('auto'), quantity('filmCoefficient', { min: 0, exclusiveMin: true, wording: 'a positive film coefficient' }, 'Fixed outside film coefficient')], {
+      error: () => `expected "auto" or ${describeExpected('filmCoefficient', 'a positive film coefficient')}`,
+    })
     .default('auto')
     .meta({ description: '"auto" (Churchill–Bernstein / Churchill–Chu, mixed) or a fixed value calibrated by the user.' }),
   radiation: z
-    .union([z.enum(['sky-ground', 'none']), z.strictObject({ surroundings: temperature('Temperature of the surroundings') })])
+    .union([z.enum(['sky-ground', 'none']), z.strictObject({ surroundings: surroundingsTemperature('Temperature of the surroundings') })], {
+      error: () => 'expected "sky-ground", "none" or a section { surroundings: temperature in °C }',
+    })
     .default('sky-ground'),
   sky: z.enum(Object.keys(SKY_MODELS) as [SkyModelName, ...SkyModelName[]]).default('berdahl-martin').meta({ description: 'Sky temperature model.' }),
-  ground_temperature: temperature('Ground temperature (default: the air temperature)').optional(),
+  ground_temperature: surroundingsTemperature('Ground temperature (default: the air temperature)').optional(),
   sun: z.boolean().default(true).meta({ description: 'Apply absorbed sun.' }),
   clear_sky: z
-    .union([
-      z.literal('ashrae-1985'),
-      z.strictObject({
-        ashrae_2009: z.strictObject({
-          tau_b: monthly('Beam optical depth τ_b of each month (the site\'s design-climate table), January first', 0.1, 1.5),
-          tau_d: monthly('Diffuse optical depth τ_d of each month, January first', 1, 4),
+    .union(
+      [
+        z.literal('ashrae-1985'),
+        z.strictObject({
+          ashrae_2009: z.strictObject({
+            tau_b: monthly('Beam optical depth τ_b of each month (the site\'s design-climate table), January first', 0.1, 1.5),
+            tau_d: monthly('Diffuse optical depth τ_d of each month, January first', 1, 4),
+          }),
         }),
-      }),
-    ])
+      ],
+      { error: () => 'expected "ashrae-1985" or a section { ashrae_2009: { tau_b: [12 values], tau_d: [12 values] } }' },
+    )
     .default('ashrae-1985')
     .meta({ description: 'Clear-sky irradiance where the weather has none: "ashrae-1985" (monthly constants interpolated by day), or the 2009 model with the site\'s optical depths.' }),
 });
 
 const designDay = z.strictObject({
-  min_air_temperature: temperature('Daily minimum air temperature'),
-  max_air_temperature: temperature('Daily maximum air temperature'),
+  min_air_temperature: airTemperature('Daily minimum air temperature'),
+  max_air_temperature: airTemperature('Daily maximum air temperature'),
   wind_speed: quantity('speed', { min: 0, max: 75, wording: 'a wind speed from 0 to 75 m/s' }, 'Mean wind speed at the reference height'),
   wind_daily_amplitude: ratio(0, 1, 'a fraction of the mean', 'Daily swing of the wind speed, peaking mid-afternoon').default(0.3),
   cloud_cover: ratio(0, 1, 'a fraction', 'Cloud cover').default(0),
-  dew_point: temperature('Dew point of the outside air (default: the daily minimum air temperature, FAO-56 eq. 48)').optional(),
+  dew_point: temperature(-100, 60, 'a dew point', 'Dew point of the outside air (default: the daily minimum air temperature, FAO-56 eq. 48)').optional(),
 });
 
 const weather = z
   .strictObject({
     design_day: designDay.optional(),
-    file: z.string().min(1).optional().meta({ description: 'Hourly weather CSV, path relative to the scenario file.' }),
+    file: text('the path of a weather CSV file').optional().meta({ description: 'Hourly weather CSV, path relative to the scenario file.' }),
     wind_reference_height: quantity('length', { min: 0.5, max: 300, wording: 'a height from 0.5 m to 300 m' }, 'Height of the wind measurement').prefault(10),
     wind_station_terrain: z
       .enum(Object.keys(TERRAIN_EXPONENTS) as [Terrain, ...Terrain[]])
@@ -218,7 +280,7 @@ const weather = z
 const firingPoint = z
   .strictObject({
     time: clockTime,
-    gas_temperature: temperature('Gas temperature at the stack inlet'),
+    gas_temperature: temperature(-50, 1700, 'a gas temperature', 'Gas temperature at the stack inlet'),
     mass_flow: quantity('massFlow', { min: 0, max: 2000, wording: 'a mass flow from 0 to 2000 kg/s' }, 'Flue gas mass flow').optional(),
     volume_flow: quantity('volumeFlow', { min: 0, max: 2000, wording: 'a volume flow from 0 to 7.2 million Nm³/h' }, 'Flue gas volume flow at normal conditions (0 °C, 101.325 kPa), instead of mass_flow').optional(),
   })
@@ -231,10 +293,10 @@ const firingPoint = z
 const gas = z
   .strictObject({
     fuel: z
-      .string()
+      .string({ error: () => `expected one of ${choices(Object.keys(FUELS))}` })
       .meta({ description: `Fuel name (${Object.keys(FUELS).join(', ')}); the flue gas follows by stoichiometry.` })
       .check((ctx) => {
-        if (!Object.hasOwn(FUELS, ctx.value)) ctx.issues.push({ code: 'custom', input: ctx.value, message: `found "${ctx.value}"; expected one of ${Object.keys(FUELS).join(', ')}` });
+        if (!Object.hasOwn(FUELS, ctx.value)) ctx.issues.push({ code: 'custom', input: ctx.value, message: `expected one of ${choices(Object.keys(FUELS))}` });
       })
       .optional(),
     fuel_analysis: z
@@ -270,7 +332,7 @@ const gas = z
     if (given.length !== 1)
       ctx.issues.push({ code: 'custom', input: v, path: [], message: `found ${given.length === 0 ? 'none' : given.join(' and ')} of fuel, fuel_analysis and composition; expected exactly one of them` });
     else if (given[0] !== 'composition' && v.excess_air === undefined)
-      ctx.issues.push({ code: 'custom', input: v, path: ['excess_air'], message: 'missing; expected the excess air as a fraction (0.15 = 15 %) with a fuel' });
+      ctx.issues.push({ code: 'custom', input: v, path: ['excess_air'], message: 'expected the excess air as a fraction from 0 to 5 (0.15 = 15 %) with a fuel' });
   });
 
 const flue = z.strictObject({
@@ -288,7 +350,9 @@ const flue = z.strictObject({
   gas,
   properties: z.enum(['mixture', 'air']).default('mixture').meta({ description: 'Gas properties: the mixture (NASA polynomials, Wilke mixing) or air.' }),
   film_coefficient: z
-    .union([z.literal('auto'), quantity('filmCoefficient', { min: 0, exclusiveMin: true, wording: 'a positive film coefficient' }, 'Fixed inside film coefficient')])
+    .union([z.literal('auto'), quantity('filmCoefficient', { min: 0, exclusiveMin: true, wording: 'a positive film coefficient' }, 'Fixed inside film coefficient')], {
+      error: () => `expected "auto" or ${describeExpected('filmCoefficient', 'a positive film coefficient')}`,
+    })
     .default('auto'),
   gas_cooling: z.boolean().default(true).meta({ description: 'Whether the gas cools as it rises (false: every height sees the inlet temperature).' }),
   gas_radiation: z.boolean().default(true).meta({ description: 'Whether the H2O–CO2 flue gas radiates to the lining (weighted sum of grey gases).' }),
@@ -297,14 +361,18 @@ const flue = z.strictObject({
 
 const run = z.strictObject({
   mode: z.enum(['cycle', 'warmup']).default('cycle'),
-  days: z.union([count(1, 366, 'Days to simulate'), z.literal('until-periodic')]).default(1),
+  days: z
+    .union([count(1, LIMITS.days, 'days to simulate', 'Days to simulate'), z.literal('until-periodic')], {
+      error: () => `expected ${wholeNumber(1, LIMITS.days, 'days to simulate')}, or "until-periodic" (repeat the first day until the wall's daily cycle settles)`,
+    })
+    .default(1),
   periodic_tolerance: quantity('temperatureDifference', { min: 0, exclusiveMin: true, wording: 'a positive temperature difference' }, 'Largest day-to-day change of any node for the periodic state').prefault(0.05),
-  max_days: count(1, 366, 'Most days to try for the periodic state').default(30),
+  max_days: count(1, LIMITS.days, 'days', 'Most days to try for the periodic state').default(30),
   output_interval: quantity('duration', { min: 60, max: 6 * 3600, wording: 'an interval from 1 min to 6 h' }, 'Interval between output instants').prefault(10),
   initial: z.enum(['steady', 'steady-at-start', 'cold']).default('steady').meta({ description: 'Initial wall: steady at the daily-mean conditions, steady at the first instant, or cold (at air temperature).' }),
   firing_start: clockTime.optional(),
   integrator: z.enum(Object.keys(INTEGRATORS) as [IntegratorName, ...IntegratorName[]]).default('implicit'),
-  relative_tolerance: z.number().min(1e-9).max(1e-2).default(1e-5),
+  relative_tolerance: ratio(1e-9, 1e-2, 'a relative tolerance', 'Relative tolerance of the integrator').default(1e-5),
   absolute_tolerance: quantity('temperatureDifference', { min: 1e-6, max: 1, wording: 'a temperature difference from 1e-6 K to 1 K' }, 'Absolute tolerance of the integrator').prefault(0.01),
 });
 
@@ -325,17 +393,27 @@ const output = z.strictObject({
 });
 
 const limits = z.strictObject({
-  shell_touch: temperature('Highest allowed outer-surface temperature (touch / burn limit)').optional(),
-  lining_service: temperature('Highest allowed lining temperature (default: the lining material limit)').optional(),
+  shell_touch: limitTemperature('Highest allowed outer-surface temperature (touch / burn limit)').optional(),
+  lining_service: limitTemperature('Highest allowed lining temperature (default: the lining material limit)').optional(),
   allowable_stress: quantity('stress', { min: 0, exclusiveMin: true, wording: 'a positive stress' }, 'Allowable thermal stress').optional(),
   acid_dew_margin: quantity('temperatureDifference', { min: 0, wording: 'a margin of zero or more' }, 'Required margin of the inner surface above the acid dew point').optional(),
   water_dew_margin: quantity('temperatureDifference', { min: 0, wording: 'a margin of zero or more' }, 'Required margin of the inner surface above the water dew point').optional(),
 });
 
+/** Names become folder names: short, and only characters every file system takes. */
+const NAME_WORDING = `expected a name of 1 to ${LIMITS.nameLength} letters, digits, ".", "_" or "-", starting with a letter or digit (it names the output folder)`;
+
 export const scenarioSchema = z
   .strictObject({
-    name: z.string().regex(/^[A-Za-z0-9][A-Za-z0-9._-]*$/, 'expected a short name of letters, digits, ".", "_" or "-"').meta({ description: 'Scenario name; also the default output folder out/<name>/.' }),
-    description: z.string().optional(),
+    name: z
+      .string({ error: () => NAME_WORDING })
+      .regex(/^[A-Za-z0-9][A-Za-z0-9._-]*$/, NAME_WORDING)
+      .max(LIMITS.nameLength, NAME_WORDING)
+      .meta({ description: `Scenario name; also the default output folder out/<name>/ (1 to ${LIMITS.nameLength} letters, digits, ".", "_" or "-").` }),
+    description: z
+      .string({ error: () => 'expected a description (text)' })
+      .refine((v) => !CONTROL.test(v), 'expected a description (text without control characters)')
+      .optional(),
     site,
     stack,
     surface,

@@ -64,10 +64,16 @@ export function normaliseUnitText(text: string, absoluteTemperature: boolean): s
 
 export type ParsedQuantity = { ok: true; value: number } | { ok: false; expected: string };
 
-/** Expected-value phrase for messages: `a length (plain number in m, or a string with a unit such as "115 mm")`. */
+/**
+ * Expected-value phrase for messages: `a length (a plain number in m, or a string with a unit such
+ * as "115 mm")`; with `what` (the allowed range in words) the quantity is named too where `what`
+ * does not: `a length: a height above 0 m and up to 500 m (a plain number in m, …)`.
+ */
 export function describeExpected(kind: QuantityKindName, what?: string): string {
   const k = QUANTITY_KINDS[kind];
-  return `${what ?? k.what} (a plain number in ${k.plainUnit}, or a string with a unit${EXAMPLES[kind] ? ` such as "${EXAMPLES[kind]}"` : ''})`;
+  const noun = k.what.replace(/^an? /, '').replace(/ \(.*$/, '');
+  const phrase = what === undefined ? k.what : what.includes(noun) ? what : `${k.what}: ${what}`;
+  return `${phrase} (a plain number in ${k.plainUnit}, or a string with a unit${EXAMPLES[kind] ? ` such as "${EXAMPLES[kind]}"` : ''})`;
 }
 
 const EXAMPLES: Partial<Record<QuantityKindName, string>> = {
@@ -92,6 +98,7 @@ export function parseQuantity(value: unknown, kind: QuantityKindName): ParsedQua
   }
   if (typeof value !== 'string') return { ok: false, expected: describeExpected(kind) };
   const trimmed = value.trim();
+  if (trimmed.length > 60) return { ok: false, expected: describeExpected(kind) }; // no quantity is written that long
   if (/^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/.test(trimmed)) return parseQuantity(Number(trimmed), kind);
   try {
     const q = Qty(normaliseUnitText(trimmed, k.absoluteTemperature === true));

@@ -5,17 +5,21 @@
  * converts units; the cross-field rules below check what no single value can; the weather is read
  * and checked here, once.
  */
-import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { scenarioSchema, type Scenario, type ScenarioMaterial } from './schema.ts';
-import { ScenarioError, formatIssues, formatPath } from './errors.ts';
+import { ScenarioError, formatIssues, formatPath, printable, type WrittenLookup } from './errors.ts';
+import { LIMITS, grouped, sizeProblems } from './limits.ts';
+import { flowPlausibility, type ScheduledFlow } from './flow.ts';
+import { readTextFile } from '../text.ts';
 import type { ModelInputs, LayerInput, WeatherInput, FiringPointInput, GasCompositionInput } from '../../model/inputs.ts';
 import type { Material, PropertyTable } from '../../physics/materials/types.ts';
 import { findMaterial } from '../../physics/materials/index.ts';
 import { validateTable } from '../../physics/properties/table.ts';
 import { airPressureAtElevation } from '../../physics/properties/air.ts';
 import { KELVIN_OFFSET, SECONDS_PER_DAY, MOLAR_MASS_AIR } from '../../physics/constants.ts';
-import { makeSiteClock, type SiteClock } from '../../model/clock.ts';
+import { makeSiteClock, CALENDAR_DATE_WORDING, type SiteClock } from '../../model/clock.ts';
+import { assembleModel } from '../../model/assemble.ts';
+import { estimateExplicitSteps } from '../../model/stiffness.ts';
 import { TERRAIN_EXPONENTS } from '../../physics/outside/wind.ts';
 import { parseWeatherCsv, WeatherFileError } from '../weather/csvFile.ts';
 import { makeDesignDay } from '../weather/designDay.ts';
@@ -30,6 +34,8 @@ export interface LoadedScenario {
   readonly inputs: ModelInputs;
   /** Absolute path of the file, when read from a file. */
   readonly path?: string;
+  /** What validation found odd but not wrong (e.g. a gas velocity above usual practice), one line each. */
+  readonly warnings: readonly string[];
 }
 
 /**
@@ -49,6 +55,8 @@ export interface ValidateOptions {
   /** The scenario file, for messages. */
   readonly file?: string;
   readonly overrides?: readonly ScenarioOverride[];
+  /** The text each value was written as in the file (YAML), so that messages show values as written. */
+  readonly written?: WrittenLookup;
 }
 
 /** A deep copy of `raw` with every override set (missing sections are created). */
@@ -88,12 +96,64 @@ function nameOverrides(problems: readonly string[], overrides: readonly Scenario
 export function validateModelInputs(raw: unknown, options: ValidateOptions = {}): LoadedScenario {
   const overrides = options.overrides ?? [];
   const value = withOverrides(raw, overrides);
+  // an overridden value was not written in the file: show it as given
+  const written = options.written;
+  const writtenInFile: WrittenLookup | undefined = written && ((path) => (overrides.some((o) => o.path.every((k, i) => path[i] === k)) ? undefined : written(path)));
   const parsed = scenarioSchema.safeParse(value);
-  if (!parsed.success) throw new ScenarioError(nameOverrides(formatIssues(parsed.error.issues, value), overrides), options.file);
+  if (!parsed.success) throw new ScenarioError(nameOverrides(formatIssues(parsed.error.issues, value, [], { written: writtenInFile }), overrides), options.file);
   const problems: string[] = [];
   const inputs = toModelInputs(parsed.data, options.baseDir ?? process.cwd(), problems);
   if (problems.length > 0 || !inputs) throw new ScenarioError(nameOverrides(problems, overrides), options.file);
-  return { scenario: parsed.data, inputs, path: options.file ? resolve(options.file) : undefined };
+  const warnings: string[] = [];
+  problems.push(...runPlausibility(parsed.data, inputs, warnings));
+  if (problems.length > 0) throw new ScenarioError(nameOverrides(problems, overrides), options.file);
+  return { scenario: parsed.data, inputs, path: options.file ? resolve(options.file) : undefined, warnings };
+}
+
+/**
+ * What no single value shows but the whole does: the size of the model (limits.ts), whether the
+ * flue can carry the flow (flow.ts), and what the explicit reference integrator would cost.
+ * Problems are returned; warnings are added to `warnings`.
+ */
+function runPlausibility(s: Scenario, inputs: ModelInputs, warnings: string[]): string[] {
+  const size = sizeProblems(inputs);
+  if (size.length > 0) return size;
+  const flow = flowPlausibility(inputs, scheduledFlows(s, inputs));
+  warnings.push(...flow.warnings);
+  if (flow.problems.length > 0) return flow.problems;
+  if (inputs.run.integrator === 'rk45') return explicitCostProblems(inputs);
+  return [];
+}
+
+/** Every scheduled flow with the key it was written under, and the flow floor at the hottest point. */
+function scheduledFlows(s: Scenario, inputs: ModelInputs): ScheduledFlow[] {
+  const days = s.flue.schedule.daily ? [['daily', s.flue.schedule.daily] as const] : (s.flue.schedule.per_day ?? []).map((d, i) => [`per_day[${i}]`, d] as const);
+  const schedule = inputs.flue.schedule;
+  const modelDays = 'daily' in schedule ? [schedule.daily] : schedule.perDay;
+  const flows: ScheduledFlow[] = [];
+  let hottest = 0;
+  days.forEach(([where, points], d) =>
+    points.forEach((p, i) => {
+      const point = modelDays[d]![i]!;
+      hottest = Math.max(hottest, point.inletTemperatureK);
+      flows.push({ path: `flue.schedule.${where}[${i}].${p.mass_flow !== undefined ? 'mass_flow' : 'volume_flow'}`, massFlow: point.massFlow, inletTemperatureK: point.inletTemperatureK });
+    }),
+  );
+  if (inputs.flue.offMassFlow !== undefined) flows.push({ path: 'flue.off_mass_flow', massFlow: inputs.flue.offMassFlow, inletTemperatureK: hottest });
+  return flows;
+}
+
+/** The explicit RK45 reference is refused up front when its stability-limited steps pass LIMITS.rk45Steps. */
+function explicitCostProblems(inputs: ModelInputs): string[] {
+  const model = assembleModel(inputs);
+  const days = inputs.run.length.kind === 'days' ? inputs.run.length.days : inputs.run.length.maxDays;
+  const t0 = inputs.run.mode === 'warmup' ? model.clock.runTimeOfLocal(0, inputs.run.firingStartClockS ?? 0) : 0;
+  const e = estimateExplicitSteps(model, t0, days * SECONDS_PER_DAY);
+  if (e.steps <= LIMITS.rk45Steps) return [];
+  const height = ((e.segment + 0.5) * inputs.stack.height) / inputs.stack.segments;
+  return [
+    `run.integrator: found "rk45" for ${days} day${days === 1 ? '' : 's'}${inputs.run.length.kind === 'until-periodic' ? ' (run.max_days)' : ''}: the explicit reference would need about ${grouped(e.steps)} steps, its step being held to ${e.stableStepS.toPrecision(2)} s by stability at ${e.node} (${height.toFixed(1)} m); expected at most ${grouped(LIMITS.rk45Steps)} steps (a limit of stackday): use the implicit integrator (the default), fewer days, or thicker cells`,
+  ];
 }
 
 /** Validate a scenario object and convert it to model inputs (`validateModelInputs` without overrides). */
@@ -109,7 +169,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   try {
     clock = makeSiteClock(s.site.time_zone, s.site.first_day);
   } catch {
-    problems.push(`site.first_day: found "${s.site.first_day}"; expected a calendar date "YYYY-MM-DD"`);
+    problems.push(`site.first_day: found "${s.site.first_day}"; expected ${CALENDAR_DATE_WORDING}`);
   }
   const windExponent = typeof s.site.terrain === 'number' ? s.site.terrain : TERRAIN_EXPONENTS[s.site.terrain];
 
@@ -301,14 +361,12 @@ function outputProblems(s: Scenario): string[] {
 function weatherFromFile(s: Scenario, baseDir: string, clock: SiteClock | null, problems: string[]): WeatherInput | null {
   const fileName = s.weather.file!;
   const refHeight = s.weather.wind_reference_height;
-  let text: string;
-  try {
-    text = readFileSync(resolve(baseDir, fileName), 'utf8');
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    problems.push(`weather.file: found "${fileName}"; expected a readable CSV file (${code === 'ENOENT' ? 'no such file' : (e as Error).message})`);
+  const read = readTextFile(resolve(baseDir, fileName), 'a weather file', LIMITS.weatherFileBytes);
+  if (!read.ok) {
+    problems.push(`weather.file: found "${printable(fileName, 200)}"; expected a readable CSV file (${read.problem})`);
     return null;
   }
+  const text = read.text;
   if (!clock) return null;
   try {
     const source = parseWeatherCsv(text, clock, fileName, { referenceHeightM: refHeight });
@@ -323,7 +381,7 @@ function weatherFromFile(s: Scenario, baseDir: string, clock: SiteClock | null, 
     return { kind: 'file', fileName, referenceHeightM: refHeight, source };
   } catch (e) {
     if (e instanceof WeatherFileError || e instanceof RangeError) {
-      problems.push(`weather.file: ${e.message}`);
+      problems.push(`weather.file: ${e.message}`, ...(e instanceof WeatherFileError ? e.more.map((m) => `weather.file: ${m}`) : []));
       return null;
     }
     throw e;

@@ -13,11 +13,15 @@
  *   optional.
  *
  * Values are instantaneous at their time stamps and interpolated linearly in time. Rows must be
- * strictly increasing in time with no gap longer than {@link MAX_GAP_HOURS}.
+ * strictly increasing in time with no gap longer than {@link MAX_GAP_HOURS}, and have no more cells
+ * than the header has columns (a decimal comma splits a number into two cells: numbers use a
+ * decimal point). Dates are calendar dates from 1900-01-01 to 2199-12-31. Every row with a problem
+ * is reported (up to {@link MAX_ROW_PROBLEMS}); text from the file is shown printable.
  */
 import { TZDate } from '@date-fns/tz';
 import { parse } from 'csv-parse/sync';
-import type { SiteClock } from '../../model/clock.ts';
+import { calendarDate, EARLIEST_DATE, LATEST_DATE, type SiteClock } from '../../model/clock.ts';
+import { printable } from '../text.ts';
 import { celsiusToKelvin } from '../../physics/constants.ts';
 import { STANDARD_WIND_HEIGHT_M } from '../../physics/outside/wind.ts';
 import type { AirState, WeatherSource } from '../../physics/outside/weather.ts';
@@ -40,16 +44,22 @@ export class WeatherFileError extends Error {
     this.line = line;
     this.column = column;
   }
+
+  /** The messages of further problems found in other rows (this error's message is the first). */
+  more: readonly string[] = [];
 }
 
-/** Column names and accepted ranges (in file units). */
+/** Rows with problems reported before reading stops (a file with a systematic mistake has one in every row). */
+export const MAX_ROW_PROBLEMS = 10;
+
+/** Column names, what they hold and accepted ranges (in file units). */
 const COLUMNS = {
-  air_temperature_c: { min: -90, max: 60, unit: '°C', required: true },
-  wind_speed_m_s: { min: 0, max: 75, unit: 'm/s', required: true },
-  beam_normal_w_m2: { min: 0, max: 1400, unit: 'W/m²', required: false },
-  diffuse_horizontal_w_m2: { min: 0, max: 1400, unit: 'W/m²', required: false },
-  cloud_cover: { min: 0, max: 1, unit: '(fraction)', required: false },
-  dew_point_c: { min: -100, max: 60.5, unit: '°C', required: false },
+  air_temperature_c: { what: 'the air temperature', min: -90, max: 60, unit: '°C', required: true },
+  wind_speed_m_s: { what: 'the wind speed', min: 0, max: 75, unit: 'm/s', required: true },
+  beam_normal_w_m2: { what: 'the beam normal irradiance', min: 0, max: 1400, unit: 'W/m²', required: false },
+  diffuse_horizontal_w_m2: { what: 'the diffuse horizontal irradiance', min: 0, max: 1400, unit: 'W/m²', required: false },
+  cloud_cover: { what: 'the cloud cover', min: 0, max: 1, unit: '(fraction)', required: false },
+  dew_point_c: { what: 'the dew point', min: -100, max: 60.5, unit: '°C', required: false },
 } as const;
 type ColumnName = keyof typeof COLUMNS;
 
@@ -84,12 +94,12 @@ const TIME_RE = /^(\d{4})-(\d{2})-(\d{2})[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{
  */
 function parseTime(text: string, timeZone: string): number | string {
   const m = TIME_RE.exec(text);
-  if (!m) return `time "${text}" is not ISO 8601 (YYYY-MM-DDTHH:MM[:SS][offset])`;
+  if (!m) return `time "${printable(text, 40)}" is not ISO 8601; expected YYYY-MM-DDTHH:MM[:SS][offset], e.g. 2026-07-15T13:00`;
   const [y, mo, d, h, mi] = [1, 2, 3, 4, 5].map((i) => Number(m[i]));
   const s = m[6] ? Number(m[6]) : 0;
   const ms = m[7] ? Number(m[7].padEnd(3, '0')) : 0;
-  const check = new Date(Date.UTC(y, mo - 1, d));
-  if (mo < 1 || mo > 12 || check.getUTCDate() !== d || h > 23 || mi > 59 || s > 59) return `time "${text}" is not a valid date and time`;
+  if (!calendarDate(y, mo, d) || h > 23 || mi > 59 || s > 59)
+    return `time "${text}" is not a valid date and time; expected a calendar date from ${EARLIEST_DATE} to ${LATEST_DATE} and a time from 00:00 to 23:59`;
   const off = m[8];
   if (off !== undefined) {
     let offsetMin = 0;
@@ -121,18 +131,22 @@ export function parseWeatherCsv(text: string, clock: SiteClock, fileName: string
     records = parse(text, { info: true, skip_empty_lines: true, trim: true, comment: '#', relax_column_count: true, bom: true }) as unknown as typeof records;
   } catch (e) {
     const err = e as { message: string; lines?: number };
-    throw new WeatherFileError(fileName, `not readable as CSV: ${err.message}`, err.lines);
+    throw new WeatherFileError(fileName, `not readable as CSV: ${printable(err.message, 160)}`, err.lines);
   }
   if (records.length === 0) throw new WeatherFileError(fileName, 'the file is empty (expected a header line with time, air_temperature_c, wind_speed_m_s)');
   const header = records[0].record;
   const headerLine = records[0].info.lines;
   const index = new Map<string, number>();
   header.forEach((name, i) => {
-    if (index.has(name)) throw new WeatherFileError(fileName, `column "${name}" appears twice in the header`, headerLine, name);
+    if (index.has(name)) throw new WeatherFileError(fileName, `column "${printable(name, 40)}" appears twice in the header`, headerLine, printable(name, 40));
     index.set(name, i);
   });
   for (const name of ['time', 'air_temperature_c', 'wind_speed_m_s']) {
-    if (!index.has(name)) throw new WeatherFileError(fileName, `required column "${name}" is missing from the header (found: ${header.join(', ')})`, headerLine, name);
+    if (!index.has(name)) {
+      const found = printable(header.join(', '), 120);
+      const hint = header.length === 1 && /[;\t]/.test(header[0]!) ? '; the cells seem to be separated by ";" or tabs, expected commas (and decimal points)' : '';
+      throw new WeatherFileError(fileName, `required column "${name}" is missing from the header (found: ${found})${hint}`, headerLine, name);
+    }
   }
   if (index.has('beam_normal_w_m2') !== index.has('diffuse_horizontal_w_m2')) {
     const missing = index.has('beam_normal_w_m2') ? 'diffuse_horizontal_w_m2' : 'beam_normal_w_m2';
@@ -142,9 +156,10 @@ export function parseWeatherCsv(text: string, clock: SiteClock, fileName: string
   const timeCol = index.get('time') as number;
 
   const rows: Row[] = [];
-  for (let r = 1; r < records.length; r++) {
-    const { record, info } = records[r];
-    const line = info.lines;
+  const problems: WeatherFileError[] = [];
+  // every row is read; a row with a problem is left out of the checks of time order
+  const readRow = (record: string[], line: number): Row => {
+    if (record.length > header.length) throw new WeatherFileError(fileName, extraCells(record, header.length), line);
     const cell = (name: string): string => {
       const i = index.get(name) as number;
       const v = i < record.length ? record[i] : '';
@@ -157,9 +172,13 @@ export function parseWeatherCsv(text: string, clock: SiteClock, fileName: string
     for (const name of present) {
       const raw = cell(name);
       const v = Number(raw);
-      if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(raw) || !Number.isFinite(v)) throw new WeatherFileError(fileName, `"${raw}" is not a number`, line, name);
       const c = COLUMNS[name];
-      if (v < c.min || v > c.max) throw new WeatherFileError(fileName, `${v} ${c.unit} is outside the accepted range ${c.min}…${c.max} ${c.unit}`, line, name);
+      const expected = `expected ${c.what} in ${c.unit} from ${c.min} to ${c.max}`;
+      if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(raw) || !Number.isFinite(v)) {
+        const comma = /^[+-]?\d+,\d+$/.test(raw) ? ` (a decimal comma? write ${raw.replace(',', '.')})` : '';
+        throw new WeatherFileError(fileName, `"${printable(raw, 40)}" is not a number${comma}; ${expected}`, line, name);
+      }
+      if (v < c.min || v > c.max) throw new WeatherFileError(fileName, `${v} ${c.unit} is outside the accepted range ${c.min}…${c.max} ${c.unit}; ${expected}`, line, name);
       values[name] = v;
     }
     if (values.dew_point_c !== undefined && values.dew_point_c > (values.air_temperature_c as number) + DEW_POINT_TOLERANCE_K) {
@@ -172,10 +191,34 @@ export function parseWeatherCsv(text: string, clock: SiteClock, fileName: string
       const gapH = (utc - prev.utcMs) / 3_600_000;
       if (gapH > MAX_GAP_HOURS) throw new WeatherFileError(fileName, `gap of ${gapH.toFixed(2)} h after line ${prev.line} exceeds the ${MAX_GAP_HOURS} h allowed`, line, 'time');
     }
-    rows.push({ utcMs: utc, line, values });
+    return { utcMs: utc, line, values };
+  };
+  for (let r = 1; r < records.length && problems.length < MAX_ROW_PROBLEMS; r++) {
+    try {
+      rows.push(readRow(records[r].record, records[r].info.lines));
+    } catch (e) {
+      if (!(e instanceof WeatherFileError)) throw e;
+      problems.push(e);
+    }
+  }
+  if (problems.length > 0) {
+    const first = problems[0];
+    first.more = problems.slice(1).map((p) => p.message);
+    if (problems.length === MAX_ROW_PROBLEMS) first.more = [...first.more, `${fileName}: reading stopped after ${MAX_ROW_PROBLEMS} rows with problems`];
+    throw first;
   }
   if (rows.length < 2) throw new WeatherFileError(fileName, `needs at least two data rows, found ${rows.length}`);
   return makeSource(rows, fileName, referenceHeightM, present, clock.timeZone);
+}
+
+/**
+ * The message for a row with more cells than the header has columns. Decimal commas are the usual
+ * cause (`12,5` is read as two cells): said so when the row's cells are all numbers or times.
+ */
+function extraCells(record: readonly string[], columns: number): string {
+  const numeric = record.slice(1).every((c) => /^[+-]?\d*\.?\d*$/.test(c.trim()));
+  const hint = numeric ? ' (decimal commas? numbers must use a decimal point, e.g. 12.5, since commas separate the cells)' : '';
+  return `found ${record.length} cells; expected ${columns}, one per column of the header${hint}`;
 }
 
 function makeSource(rows: Row[], fileName: string, referenceHeightM: number, present: ColumnName[], timeZone: string): WeatherFileSource {

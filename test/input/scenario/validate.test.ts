@@ -4,10 +4,13 @@
  * validated with everything else.
  */
 import { describe, it, expect } from 'vitest';
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, truncateSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { parse } from 'yaml';
 import { validateModelInputs } from '../../../src/input/scenario/validate.ts';
 import { ScenarioError } from '../../../src/input/scenario/errors.ts';
+import { problemsOf } from './helpers.ts';
 import { TERRAIN_EXPONENTS } from '../../../src/physics/outside/wind.ts';
 import { SKY_MODELS } from '../../../src/physics/outside/boundary.ts';
 import { scenarioJsonSchema } from '../../../src/input/scenario/schema.ts';
@@ -60,5 +63,28 @@ describe('overrides', () => {
     const s = demo();
     validateModelInputs(s, { overrides: [{ path: ['run', 'days'], value: 3 }] });
     expect(s.run.days).toBe('until-periodic');
+  });
+});
+
+describe('the weather file is read only when it is text of a reasonable size', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'stackday-weather-'));
+  const withWeatherFile = (name: string) => {
+    const s = demo();
+    delete s.weather.design_day;
+    s.weather.file = name;
+    s.run.days = 1;
+    return s;
+  };
+
+  it('a weather file over 16 MiB is refused before it is read', () => {
+    const big = join(dir, 'big.csv');
+    writeFileSync(big, '');
+    truncateSync(big, 17 * 1024 * 1024); // a sparse file: its size, without writing 17 MB
+    expect(problemsOf(withWeatherFile('big.csv'), { baseDir: dir })).toEqual(['weather.file: found "big.csv"; expected a readable CSV file (it is 17.8 MB; a weather file may be at most 16.8 MB (a limit of stackday))']);
+  });
+
+  it('a weather file of binary data is summarised', () => {
+    writeFileSync(join(dir, 'binary.csv'), Buffer.from([0x74, 0x69, 0x6d, 0x65, 0, 0, 0xff, 0x01]));
+    expect(problemsOf(withWeatherFile('binary.csv'), { baseDir: dir })[0]).toMatch(/^weather\.file: found "binary\.csv"; expected a readable CSV file \(it is not text: 8 bytes, 4 of them not printable UTF-8/);
   });
 });

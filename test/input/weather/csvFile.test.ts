@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { makeSiteClock } from '../../../src/model/clock.ts';
-import { MAX_GAP_HOURS, WeatherFileError, parseWeatherCsv } from '../../../src/input/weather/csvFile.ts';
+import { MAX_GAP_HOURS, MAX_ROW_PROBLEMS, WeatherFileError, parseWeatherCsv } from '../../../src/input/weather/csvFile.ts';
 
 const clock = makeSiteClock('Europe/Oslo', '2026-07-14');
 const FILE = 'oslo.csv';
@@ -164,5 +164,61 @@ describe('parseWeatherCsv: bad files name file, line and column', () => {
   it('an empty file or a header alone', () => {
     expect(errorOf('').message).toMatch(/^oslo\.csv: the file is empty/);
     expect(errorOf(HEADER).message).toMatch(/^oslo\.csv: needs at least two data rows, found 0/);
+  });
+});
+
+describe('parseWeatherCsv: rows that do not fit the header', () => {
+  it('a row with more cells than the header is refused, naming the line and both counts', () => {
+    expect(errorOf(withRow(2, '2026-07-14T01:00,13.0,3.0,0.7,10.0,extra')).message).toBe('oslo.csv, line 3: found 6 cells; expected 5, one per column of the header');
+  });
+
+  it('decimal commas are caught and said so, not split silently into other columns', () => {
+    // "13,5" is read as the two cells 13 and 5: the row has one cell too many
+    expect(errorOf(withRow(2, '2026-07-14T01:00,13,5,3.0,0.7,10.0')).message).toMatch(/^oslo\.csv, line 3: found 6 cells; expected 5, one per column of the header \(decimal commas\? numbers must use a decimal point, e\.g\. 12\.5/);
+    // quoted, "13,5" stays one cell: a number with a decimal comma
+    expect(errorOf(withRow(2, '2026-07-14T01:00,"13,5",3.0,0.7,10.0')).message).toMatch(/line 3, column "air_temperature_c": "13,5" is not a number \(a decimal comma\? write 13\.5\); expected the air temperature in °C from -90 to 60/);
+  });
+
+  it('a file separated by semicolons is said to be so', () => {
+    const text = ['time;air_temperature_c;wind_speed_m_s', '2026-07-14T00:00;14,0;2,0', '2026-07-14T01:00;13,0;3,0'].join('\n');
+    expect(errorOf(text).message).toMatch(/required column "time" is missing from the header .*separated by ";" or tabs, expected commas \(and decimal points\)/);
+  });
+
+  it('a value out of range says the quantity, the unit and the range', () => {
+    expect(errorOf(withRow(2, '2026-07-14T01:00,13,76,0.5,10')).message).toMatch(/76 m\/s is outside the accepted range 0…75 m\/s; expected the wind speed in m\/s from 0 to 75/);
+  });
+});
+
+describe('parseWeatherCsv: times are real calendar dates', () => {
+  it.each(['2026-13-01T00:00', '2026-00-10T00:00', '0000-07-14T00:00', '2026-02-30T00:00', '2200-01-01T00:00'])('%s is refused with the accepted dates', (time) => {
+    expect(errorOf(withRow(1, `${time},14.0,2.0,0.5,10.0`)).message).toBe(
+      `oslo.csv, line 2, column "time": time "${time}" is not a valid date and time; expected a calendar date from 1900-01-01 to 2199-12-31 and a time from 00:00 to 23:59`,
+    );
+  });
+});
+
+describe('parseWeatherCsv: text from the file is never echoed raw', () => {
+  it('a cell with control characters is escaped in the message', () => {
+    const message = errorOf(withRow(1, '2026-07-14T00:00,1\u001b[2J4,2.0,0.5,10.0')).message;
+    expect(message).toContain('"1\\u001b[2J4" is not a number');
+    expect(message).not.toContain('\u001b');
+  });
+});
+
+describe('parseWeatherCsv: one line per problem', () => {
+  it('every row with a problem is reported, not only the first', () => {
+    const text = [HEADER, '2026-07-14T00:00,14.0,fast,0.5,10.0', '2026-07-14T01:00,13,5,3.0,0.7,10.0', '2026-07-14T02:00,12.0,4.0,0.9,9.0', '2026-07-14T03:00,99,4.0,1.0,9.0'].join('\n');
+    const e = errorOf(text);
+    expect(e.message).toMatch(/^oslo\.csv, line 2, column "wind_speed_m_s": "fast" is not a number/);
+    expect(e.more).toHaveLength(2);
+    expect(e.more[0]).toMatch(/^oslo\.csv, line 3: found 6 cells; expected 5/);
+    expect(e.more[1]).toMatch(/^oslo\.csv, line 5, column "air_temperature_c": 99 °C is outside the accepted range/);
+  });
+
+  it(`reading stops after ${MAX_ROW_PROBLEMS} rows with problems, and says so`, () => {
+    const rows = Array.from({ length: 30 }, (_, h) => `2026-07-14T${String(h % 24).padStart(2, '0')}:00,1${h},5,2,0.5,10`); // decimal commas throughout
+    const e = errorOf([HEADER, ...rows].join('\n'));
+    expect(e.more).toHaveLength(MAX_ROW_PROBLEMS);
+    expect(e.more.at(-1)).toBe(`oslo.csv: reading stopped after ${MAX_ROW_PROBLEMS} rows with problems`);
   });
 });
