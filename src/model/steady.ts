@@ -68,14 +68,16 @@ export function steadyState(system: OdeSystem, guess: Float64Array, options: Ste
 
 /**
  * The system with its drivers frozen: dy/dt at any t is the mean of dy/dt at `instants` (one
- * instant: the conditions of that instant; 24 hourly instants: the day's mean conditions). The
- * Jacobian is that of the middle instant. Its steady state is what `steadyState` finds.
+ * instant: the conditions of that instant; 24 hourly instants: the day's mean conditions), and its
+ * Jacobian the mean of theirs. Its steady state is what `steadyState` finds.
  */
 export function averagedOverInstants(system: OdeSystem, instants: readonly number[]): OdeSystem {
   const one = new Float64Array(system.size);
   const oneAux = new Float64Array(system.auxSize);
   const m = instants.length;
-  const middle = instants[Math.floor(m / 2)]!;
+  const jl = new Float64Array(system.size);
+  const jd = new Float64Array(system.size);
+  const ju = new Float64Array(system.size);
   return {
     size: system.size,
     auxSize: system.auxSize,
@@ -88,6 +90,22 @@ export function averagedOverInstants(system: OdeSystem, instants: readonly numbe
         for (let i = 0; i < oneAux.length; i++) aux[i] += oneAux[i]! / m;
       }
     },
-    jacobian: system.jacobian ? (_t, y, lower, diag, upper) => system.jacobian!(middle, y, lower, diag, upper) : undefined,
+    // the mean of the instants' Jacobians (the middle instant's alone misjudges the sinks of hours
+    // with other sun, wind and firing, and Newton then crawls)
+    jacobian: system.jacobian
+      ? (_t, y, lower, diag, upper) => {
+          lower.fill(0);
+          diag.fill(0);
+          upper.fill(0);
+          for (const tk of instants) {
+            system.jacobian!(tk, y, jl, jd, ju);
+            for (let i = 0; i < jd.length; i++) {
+              lower[i] += jl[i]! / m;
+              diag[i] += jd[i]! / m;
+              upper[i] += ju[i]! / m;
+            }
+          }
+        }
+      : undefined,
   };
 }

@@ -158,6 +158,9 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
   const az = new Float64Array(nAux);
   const auxIntegral = new Float64Array(nAux);
   const yOut = new Float64Array(n);
+  const yPrevious = new Float64Array(n); // the last accepted step's start (the stage-2 predictor)
+  let hPrevious = 0;
+  let havePrevious = false;
   let freshStart = true; // f1 is a fresh evaluation after a start or a stop (see the dense output)
   const outputs = dense?.instants ?? [];
   let nextOutput = 0;
@@ -225,8 +228,14 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
 
   for (let s = 0; s < stops.length; s++) {
     const stop = stops[s];
-    if (s > 0 && !rhs(t, y, f1, a1)) throw new IntegrationError(`TR-BDF2: ${nonFinite}`, t);
+    if (s > 0) {
+      if (!rhs(t, y, f1, a1)) throw new IntegrationError(`TR-BDF2: ${nonFinite}`, t);
+      // a stop is where the forcing may turn a corner: start again from a step sized to the fresh
+      // derivatives (Hairer, Nørsett & Wanner's starting step) rather than the one that came before
+      h = Math.max(Math.min(h, 8 * guessInitialStep(system, t, y, f1, stop - t, 2, atol, rtol, z, fz, az, stats)), minimumStep(t));
+    }
     freshStart = true;
+    havePrevious = false;
     let previousRejected = false;
     while (t < stop) {
       if (stats.steps + stats.rejected + stats.newtonFailures >= maxSteps) {
@@ -250,10 +259,21 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
         mUpper[i] = -hd * jUpper[i];
       }
 
-      // Stage 2: trapezoid to t + γh; predictor: explicit Euler.
-      for (let i = 0; i < n; i++) {
-        psi[i] = y[i] + hd * f1[i];
-        z[i] = y[i] + GAMMA * hStep * f1[i];
+      // Stage 2: trapezoid to t + γh; predictor: the quadratic through the last step's start, its
+      // end y_n and the slope f_n there, extrapolated (explicit Euler after a start or a stop)
+      if (havePrevious) {
+        const theta = 1 + (GAMMA * hStep) / hPrevious;
+        const c = theta * (theta - 1);
+        for (let i = 0; i < n; i++) {
+          psi[i] = y[i] + hd * f1[i];
+          const dy = y[i] - yPrevious[i];
+          z[i] = yPrevious[i] + theta * dy + c * (hPrevious * f1[i] - dy);
+        }
+      } else {
+        for (let i = 0; i < n; i++) {
+          psi[i] = y[i] + hd * f1[i];
+          z[i] = y[i] + GAMMA * hStep * f1[i];
+        }
       }
       let outcome: NewtonOutcome = solveStage(t + GAMMA * hStep, hd, f2, a2);
       let slow = stageEvaluations > NEWTON_SLOW_EVALUATIONS;
@@ -300,6 +320,9 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
           }
           nextOutput++;
         }
+        yPrevious.set(y);
+        hPrevious = hStep;
+        havePrevious = true;
         t = tNew;
         y.set(z);
         f1.set(f3);

@@ -37,9 +37,11 @@ describe('circumferential sectors', () => {
       for (let s = 0; s < S; s++)
         for (let j = 0; j < 8; j++)
           for (let i = 0; i < n; i++) worst = Math.max(worst, Math.abs(eight.series.temperatureK[((k * S + s) * 8 + j) * n + i]! - one.series.temperatureK[(k * S + s) * n + i]!));
-    // symmetric problem: the sectors differ from the averaged wall only by integrator error
-    // (measured 0.002 K; rtol 1e-5 of ~400 K is 0.004 K per step)
-    expect(worst).toBeLessThan(0.01);
+    // symmetric problem: the sectors differ from the averaged wall only by integrator error; the two
+    // runs choose their own steps (the sectors' Newton matrix carries the circumferential links on
+    // its diagonal), each within the time error of the default tolerances, about 0.05 K (measured
+    // 0.02 K)
+    expect(worst).toBeLessThan(0.05);
   });
 
   it('spreads a circumferential wave at the rate of conduction on a ring, α/r² (Carslaw & Jaeger)', () => {
