@@ -115,8 +115,12 @@ export function radiationToSkyAndGround(
   skyK: number,
   groundK: number,
 ): number {
-  const ts4 = surfaceK ** 4;
-  return emissivity * STEFAN_BOLTZMANN * (0.5 * (ts4 - skyK ** 4) + 0.5 * (ts4 - groundK ** 4));
+  // fourth powers as products (hot path)
+  const ts2 = surfaceK * surfaceK;
+  const sky2 = skyK * skyK;
+  const ground2 = groundK * groundK;
+  const ts4 = ts2 * ts2;
+  return emissivity * STEFAN_BOLTZMANN * (0.5 * (ts4 - sky2 * sky2) + 0.5 * (ts4 - ground2 * ground2));
 }
 
 /**
@@ -124,7 +128,7 @@ export function radiationToSkyAndGround(
  * For Jacobians. Example: T_s = 300 K, ε = 0.9 → 4·0.9·5.670374419e-8·2.7e7 = 5.5116 W/(m² K).
  */
 export function radiationCoefficientToSkyAndGround(surfaceK: number, emissivity: number): number {
-  return 4 * emissivity * STEFAN_BOLTZMANN * surfaceK ** 3;
+  return 4 * emissivity * STEFAN_BOLTZMANN * surfaceK * surfaceK * surfaceK;
 }
 
 /** Denominator 1/ε1 + (r1/r2)(1/ε2 − 1) of the grey exchange between concentric cylinders. */

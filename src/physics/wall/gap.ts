@@ -40,7 +40,7 @@ export function gapConvectionInputs(gap: GapLink, t1K: number, t2K: number, out:
   const air = airPropertiesInto(scratchAir, 0.5 * (t1K + t2K), pressurePa);
   const width = gap.outerRadius - gap.innerRadius;
   const diffusivity = air.kinematicViscosity / air.prandtl;
-  out.rayleighGap = (STANDARD_GRAVITY * air.expansion * Math.abs(t1K - t2K) * width ** 3) / (air.kinematicViscosity * diffusivity);
+  out.rayleighGap = (STANDARD_GRAVITY * air.expansion * Math.abs(t1K - t2K) * width * width * width) / (air.kinematicViscosity * diffusivity);
   out.pr = air.prandtl;
   out.aspectRatio = heightM / width;
   out.innerDiameter = 2 * gap.innerRadius;
