@@ -214,7 +214,7 @@ export const CORRELATIONS = {
     inputs: ['forced', 'natural', 'aiding'],
     compute: (forced, natural, aiding) => mixedConvectionChurchill(forced, natural, aiding === 1),
     description:
-      'Inside film of the forced flow and the natural convection on the lining together: (h_F³ + h_N³)^(1/3) aiding, |h_F³ − h_N³|^(1/3) opposing (aiding = 1 or 0).',
+      'Inside film of the forced flow and the natural convection on the lining together: (h_F³ + h_N³)^(1/3) where buoyancy aids the flow (a wall warmer than the gas), |h_F³ − h_N³|^(1/3) where it opposes a laminar flow; opposing a turbulent flow, the aiding sum (opposing buoyancy raises turbulent heat transfer: Jackson, Cotton & Axcell 1989, from memory).',
     source: MIXED_CONVECTION_RANGE.source,
     ranges: {},
     constraints: [],
