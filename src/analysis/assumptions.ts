@@ -41,6 +41,7 @@ export function runAssumptions(inputs: ModelInputs, result: RunResult): string[]
     clear.kind === 'ashrae-1985'
       ? 'Clear sky where the weather gives no irradiance: ASHRAE (1985) with its monthly constants interpolated by day between the 21sts.'
       : 'Clear sky where the weather gives no irradiance: ASHRAE (2009) with the site\'s monthly optical depths, interpolated by day.',
+    ...(inputs.weather.kind === 'file' ? (inputs.weather.notes?.assumptions ?? []) : []),
     ...result.assumptions,
   ];
 }

@@ -16,6 +16,11 @@ import { gasAlongHeight } from './gasAlongHeight.ts';
 import { outsideHeatFlows } from './outsideHeatFlows.ts';
 import { warmupInnerSurface } from './warmupInnerSurface.ts';
 import { renderChartPng } from './render.ts';
+import { annualMarginMap } from './annualMarginMap.ts';
+import { monthlyDewHours } from './monthlyDewHours.ts';
+import { monthlyHeatLoss } from './monthlyHeatLoss.ts';
+import { cycleHistogram } from './cycleHistogram.ts';
+import type { AnnualParts } from '../../analysis/annual/index.ts';
 import { decimals } from '../format.ts';
 
 export { renderChartPng } from './render.ts';
@@ -29,6 +34,11 @@ export { acidMarginMap, marginClasses, marginClassOf, type MarginClass } from '.
 export { gasAlongHeight, type GasAlongHeightOptions } from './gasAlongHeight.ts';
 export { outsideHeatFlows } from './outsideHeatFlows.ts';
 export { warmupInnerSurface } from './warmupInnerSurface.ts';
+export { annualMarginMap } from './annualMarginMap.ts';
+export { monthlyDewHours } from './monthlyDewHours.ts';
+export { monthlyHeatLoss } from './monthlyHeatLoss.ts';
+export { cycleHistogram } from './cycleHistogram.ts';
+export { monthLabel } from './bars.ts';
 
 export interface RenderAllChartsOptions {
   /** Chart width, px (default 1000). */
@@ -39,6 +49,8 @@ export interface RenderAllChartsOptions {
   readonly heightsToPlot?: readonly number[];
   /** Where the summary's figures occur (from summariseRun); found again from the series when absent. */
   readonly locations?: SummaryLocations;
+  /** An annual run's statistics (the margin grid and cycle counts): with them and summary.annual, the annual charts are drawn too. */
+  readonly annual?: AnnualParts | null;
 }
 
 export interface RenderedChart {
@@ -80,5 +92,11 @@ export function renderAllCharts(series: TimeSeries, summary: Summary, inputs: Mo
   configs.push({ name: 'outside-heat-flows', config: outsideHeatFlows(series, summary, inputs, { ...common, segment: series.segments - 1 }) });
   const warm = warmupInnerSurface(series, summary, inputs, common);
   if (warm !== null) configs.push({ name: 'warmup-inner-surface', config: warm });
+  if (summary.annual && options.annual) {
+    configs.push({ name: 'year-margin-map', config: annualMarginMap(summary, options.annual, inputs, size) });
+    configs.push({ name: 'monthly-dew-hours', config: monthlyDewHours(summary.annual, size) });
+    configs.push({ name: 'monthly-heat-loss', config: monthlyHeatLoss(summary.annual, size) });
+    configs.push({ name: 'cycle-histogram', config: cycleHistogram(summary.annual, options.annual, size) });
+  }
   return configs.map(({ name, config }) => ({ name, fileName: `${name}.png`, title: chartTitle(config), config, png: renderChartPng(config, size) }));
 }
