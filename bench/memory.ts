@@ -16,7 +16,7 @@ import { parse, stringify } from 'yaml';
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 
 /** Run the compiled command's main() in a child node; returns its exit code, peak RSS (MB) and wall time (s). */
-function measure(args: string[]): { code: number; peakMb: number; seconds: number } {
+export function measure(args: string[]): { code: number; peakMb: number; seconds: number } {
   const script = `
     const { main } = await import(${JSON.stringify(join(ROOT, 'dist/cli/main.js'))});
     const code = await main(${JSON.stringify(args)});

@@ -13,6 +13,7 @@
  * 4. Charts: the time to render every chart of the demo.
  * 5. Start-up of the compiled command (bench/startup.ts).
  * 6. Memory: peak memory and time of a 365-day run of the demo (bench/memory.ts).
+ * 7. A year of the demo with its typical year and plant calendar: compute, peak memory (bench/annual.ts).
  *
  * It runs the compiled package (dist/, built by `npm run bench` first), as users do: the
  * development loader adds overhead of its own to every module access.
@@ -23,6 +24,7 @@ import type { ModelInputs } from '../dist/model/inputs.js';
 import type { RunResult } from '../dist/model/timeseries.js';
 import { benchStartup } from './startup.ts';
 import { benchMemory } from './memory.ts';
+import { benchAnnual } from './annual.ts';
 
 /** Runs before timing: V8 needs about this many one-day runs before its optimised code settles. */
 const WARM_UP_RUNS = 10;
@@ -144,3 +146,5 @@ try {
 benchStartup();
 console.log('');
 benchMemory();
+console.log('');
+benchAnnual();

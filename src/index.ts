@@ -13,9 +13,11 @@ import { validateScenario, loadScenarioFile, type LoadedScenario } from './input
 import { simulate, type SimulateOptions } from './model/simulate.ts';
 import type { InstantSink } from './model/sinks.ts';
 import { DailyExtremes, summariseRun, type SummaryLocations } from './analysis/metrics/index.ts';
+import { AnnualRecorder, annualSummary, type AnnualParts } from './analysis/annual/index.ts';
 import { summaryJson, writeArtefacts, writeArtefactsAtomically, type Artefact } from './output/write.ts';
 import { DEFAULT_SERIES_FILE, seriesFileArtefacts, segmentsCsv, sizeNotice, timeseriesCsv } from './output/csv.ts';
 import { StagedFolder, pauseForTest } from './output/folder.ts';
+import { cyclesCsv, monthlyCsv } from './output/annualCsv.ts';
 import { BufferedFileWriter } from './output/textOut.ts';
 import type { ModelInputs } from './model/inputs.ts';
 import type { RunResult } from './model/timeseries.ts';
@@ -35,7 +37,8 @@ export { OutputFolderError } from './output/folder.ts';
 export type { InstantSink, InstantView } from './model/sinks.ts';
 export type { ModelInputs } from './model/inputs.ts';
 export type { RunResult, TimeSeries, EnergyAccount } from './model/timeseries.ts';
-export type { Summary, Verdict } from './analysis/summary.ts';
+export type { Summary, Verdict, AnnualSummary, MonthFigures, WallCycles } from './analysis/summary.ts';
+export { AnnualRecorder, annualSummary } from './analysis/annual/index.ts';
 export type { SummaryLocations, Location as FigureLocation } from './analysis/metrics/index.ts';
 
 /** The tool's version, from package.json. */
@@ -48,6 +51,8 @@ export interface Run {
   /** Where each located figure of the summary occurs, as output-instant and segment indices. */
   readonly locations: SummaryLocations;
   readonly description: string | null;
+  /** An annual run's statistics as gathered (the margin grid and the cycle counts behind summary.annual); null for other runs. */
+  readonly annual: AnnualParts | null;
 }
 
 /** Validated inputs and description of a scenario given as a file path, a scenario object, a loaded scenario or model inputs. */
@@ -78,11 +83,14 @@ export function runScenario(scenario: string | Record<string, unknown> | LoadedS
 
 function runResolved({ inputs, description, warnings }: Resolved, options: SimulateOptions): Run {
   const daily = new DailyExtremes();
-  const simulated = simulate(inputs, { ...options, sinks: [daily, ...(options.sinks ?? [])] });
+  const annual = inputs.annual ? new AnnualRecorder({ annual: inputs.annual, cycleThresholdK: inputs.limits.cyclesAbove?.rangeK ?? null }) : undefined;
+  const simulated = simulate(inputs, { ...options, sinks: [daily, ...(annual ? [annual] : []), ...(options.sinks ?? [])] });
   // what validation found odd (e.g. a gas velocity above usual practice) is reported with the run's warnings
   const result = warnings.length ? { ...simulated, warnings: [...warnings, ...simulated.warnings] } : simulated;
-  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description, daily });
-  return { inputs, result, summary, locations, description };
+  const parts = annual ? annual.parts() : null;
+  const annualFigures = parts ? annualSummary(parts, result.energy.byDay, inputs) : undefined;
+  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description, daily, annual: annualFigures });
+  return { inputs, result, summary, locations, description, annual: parts };
 }
 
 export interface WriteOptions {
@@ -96,11 +104,16 @@ export interface WriteOptions {
 }
 
 /**
- * The files made once a run is complete: summary.json, then (unless `charts` is false) the PNG
- * charts and report.html. A new file of this kind is one more entry here.
+ * The files made once a run is complete: summary.json, for an annual run monthly.csv and
+ * cycles.csv, then (unless `charts` is false) the PNG charts and report.html. A new file of this
+ * kind is one more entry here.
  */
 export async function finalArtefacts(run: Run, options: WriteOptions = {}): Promise<Artefact[]> {
   const artefacts: Artefact[] = [{ fileName: 'summary.json', content: summaryJson(run.summary) }];
+  if (run.summary.annual && run.annual) {
+    artefacts.push({ fileName: 'monthly.csv', content: monthlyCsv(run.summary.annual) });
+    artefacts.push({ fileName: 'cycles.csv', content: cyclesCsv(run.summary.annual, run.annual) });
+  }
   if (options.charts !== false) {
     const { renderAllCharts } = await import('./output/charts/index.ts');
     const { renderReportHtml } = await import('./output/report.ts');
@@ -109,6 +122,7 @@ export async function finalArtefacts(run: Run, options: WriteOptions = {}): Prom
       height: options.chartHeight ?? 600,
       heightsToPlot: options.chartHeightsM,
       locations: run.locations,
+      annual: run.annual,
     });
     for (const c of charts) artefacts.push({ fileName: c.fileName, content: c.png });
     artefacts.push({ fileName: 'report.html', content: renderReportHtml(run.summary, run.inputs, charts) });

@@ -46,6 +46,7 @@ export function runAssumptions(inputs: ModelInputs, result: RunResult): string[]
           `The wall is cut into ${inputs.stack.sectors} sectors round the circumference: each takes the beam by the cosine between its outward normal and the sun's direction, diffuse and ground-reflected light alike; neighbouring sectors exchange heat by conduction round every layer (air gaps: still air and a radiative conductivity); the outside film coefficient is the circumferential mean evaluated at each sector's own surface temperature (no windward-to-leeward variation); the flue gas is one well-mixed stream per segment.`,
         ]
       : []),
+    ...(inputs.weather.kind === 'file' ? (inputs.weather.notes?.assumptions ?? []) : []),
     ...result.assumptions,
   ];
 }

@@ -126,6 +126,100 @@ export interface SectorSummary {
   readonly shadiest_sector_azimuth_deg: number;
 }
 
+/** Figures of one calendar month of an annual run (its days in the run only). */
+export interface MonthFigures {
+  /** `YYYY-MM`. */
+  readonly month: string;
+  /** Run days dated in the month (by the local date at the middle of the day). */
+  readonly days: number;
+  /** Heat lost to the outside over those days, net of sun, kWh. */
+  readonly heat_loss_kwh: number;
+  /** Heat from the gas into the wall over those days, kWh. */
+  readonly gas_to_wall_kwh: number;
+  readonly shell_min_c: number;
+  readonly shell_max_c: number;
+  readonly lining_min_c: number;
+  readonly lining_max_c: number;
+  readonly inner_surface_min_c: number;
+  readonly lowest_water_dew_margin_k: number;
+  /** Null when the gas has no acid dew point. */
+  readonly lowest_acid_dew_margin_k: number | null;
+  /** Hours of the month the inner surface spends below each dew point, at every height, bottom → top. */
+  readonly hours_below_water_dew: readonly HeightHours[];
+  readonly hours_below_acid_dew: readonly HeightHours[];
+}
+
+/** Rainflow cycles of one range bin. */
+export interface CycleBin {
+  /** The bin holds ranges from from_k (inclusive) to to_k (exclusive), K. */
+  readonly from_k: number;
+  readonly to_k: number;
+  /** Cycles counted (full cycles 1, half cycles ½). */
+  readonly cycles: number;
+}
+
+/** Cycles of one temperature difference at one height (the sector with the most, when the wall has sectors). */
+export interface CyclesAtHeight {
+  readonly height_m: number;
+  /** Cycles of any range. */
+  readonly cycles: number;
+  /** Cycles with a range above the threshold (null without a threshold). */
+  readonly cycles_above_threshold: number | null;
+  readonly largest_range_k: number;
+}
+
+/** Thermal cycles of the temperature difference across the whole wall or across one layer. */
+export interface WallCycles {
+  /** `whole wall` or the layer's label. */
+  readonly across: string;
+  /** Height whose counts are given here and in the histogram: the most cycles above the threshold, else the largest range. */
+  readonly governing_height_m: number;
+  readonly cycles: number;
+  readonly cycles_above_threshold: number | null;
+  readonly largest_range_k: number;
+  /** Width of the histogram's bins, K. */
+  readonly bin_width_k: number;
+  /** Ranges at the governing height. */
+  readonly histogram: readonly CycleBin[];
+  readonly by_height: readonly CyclesAtHeight[];
+}
+
+/**
+ * The annual figures of a run over a year (or a range of dates): summary.json `annual`. Its
+ * peak_shell_*, peak_lining_* and min_inner_surface_* are those of the whole run (the summary's own
+ * cover the last day).
+ */
+export interface AnnualSummary
+  extends Pick<
+    Summary,
+    'peak_shell_c' | 'peak_shell_time' | 'peak_shell_height_m' | 'peak_lining_c' | 'peak_lining_time' | 'peak_lining_height_m' | 'min_inner_surface_c' | 'min_inner_surface_time' | 'min_inner_surface_height_m'
+  > {
+  readonly first_day: string;
+  readonly last_day: string;
+  readonly days: number;
+  /** True when the run covers at least 365 days (its totals are then a year's). */
+  readonly full_year: boolean;
+  /** Hours below each dew point over the run, at every height, bottom → top. */
+  readonly hours_below_water_dew: readonly HeightHours[];
+  readonly hours_below_acid_dew: readonly HeightHours[];
+  readonly heat_loss_kwh: number;
+  readonly gas_to_wall_kwh: number;
+  /** (With the peaks of the summary's fields of the same names, over the whole run.) */
+  readonly months: readonly MonthFigures[];
+  readonly cycles: {
+    /** How the cycles were counted. */
+    readonly method: string;
+    /** The temperature differences were sampled at every output instant, this many minutes apart. */
+    readonly sampled_every_min: number;
+    /** Range above which cycles are counted separately, K (limits.cycles_above.range; null when not set). */
+    readonly threshold_k: number | null;
+    /** The whole wall first, then each layer inside → outside. */
+    readonly across: readonly WallCycles[];
+  };
+  /** Verdicts on the annual limits: hours below the acid and water dew points, cycles above a range. */
+  readonly verdicts: readonly Verdict[];
+}
+
 export interface Summary {
   readonly tool: { readonly name: 'stackday'; readonly version: string };
   readonly scenario: { readonly name: string; readonly description: string | null; readonly site: string; readonly first_day: string; readonly time_zone: string };
@@ -194,6 +288,8 @@ export interface Summary {
   } | null;
   /** Figures of every simulated day (a periodic study: its settled day only), first to last. */
   readonly daily: readonly DayFigures[];
+  /** Annual runs only (run.days: year or run.last_day): monthly and annual figures, thermal cycles, annual verdicts. */
+  readonly annual?: AnnualSummary;
   /** What the run assumed (wind conversion, pressures, gas radiation, clear sky) and every accepted extrapolation of a correlation, once each. */
   readonly assumptions: readonly string[];
   /** Problems the reader must see: correlations beyond their range without justification (how far, where), an unreached periodic state, a poor energy balance. */

@@ -144,7 +144,7 @@ function addRunOptions(cmd: Command): Command {
   return cmd
     .option('-o, --out <dir>', 'output folder (default: out/<scenario name>/)')
     .addOption(new Option('--integrator <name>', 'time integrator: implicit (TR-BDF2, default) or rk45 (Dormand–Prince reference)').choices(['implicit', 'rk45']))
-    .option('--days <n>', 'simulate this many days (overrides run.days)')
+    .option('--days <n>', 'simulate this many days, or "year" for an annual run (overrides run.days)')
     .option('--no-charts', 'skip the PNG charts and report.html')
     .option('--chart-size <WxH>', 'chart size in pixels', '1000x600')
     .option('--chart-heights <m,...>', 'heights in m for the temperature-through-the-day charts (default: top and bottom)')

@@ -9,7 +9,8 @@ import { buildWallMesh, type WallMesh } from '../physics/wall/mesh.ts';
 import { StackWallSystem, type StackGeometry } from './system.ts';
 import type { DriverContext } from './drivers.ts';
 import { TERRAIN_BOUNDARY_LAYERS, windAtHeight, windAtHeightFromStation } from '../physics/outside/wind.ts';
-import { makeFiringSchedule } from './firing.ts';
+import { makeFiringSchedule, type FiringSchedule } from './firing.ts';
+import { makePlantCalendar } from './calendar.ts';
 import { makeGasPropertyTable, type GasPropertyLookup } from '../physics/properties/flueGas.ts';
 import { makeAirGasPropertyLookup } from '../physics/properties/airGasLookup.ts';
 
@@ -45,6 +46,13 @@ export function flueGasPropertyLookup(inputs: ModelInputs): GasPropertyLookup {
   return inputs.flue.properties === 'air' ? makeAirGasPropertyLookup(inputs.flue.pressurePa) : makeGasPropertyTable(inputs.flue.composition, inputs.flue.pressurePa);
 }
 
+/** The firing schedule of the inputs: daily or per-day points, or a plant calendar from the run's first local date. */
+function firingScheduleOf(inputs: ModelInputs): FiringSchedule {
+  const { schedule, offMassFlow } = inputs.flue;
+  if ('calendar' in schedule) return makePlantCalendar({ ...schedule.calendar, offMassFlow: offMassFlow ?? schedule.calendar.offMassFlow }).firingSchedule(inputs.site.startDate);
+  return makeFiringSchedule({ ...schedule, offMassFlow });
+}
+
 /** Build the mesh, the drivers and the ODE system for the inputs. */
 export function assembleModel(inputs: ModelInputs): AssembledModel {
   const clock = makeSiteClock(inputs.site.timeZone, inputs.site.startDate);
@@ -62,7 +70,7 @@ export function assembleModel(inputs: ModelInputs): AssembledModel {
     innerDiameter: inputs.stack.innerDiameter,
     outerDiameter: 2 * mesh.outerRadius,
   };
-  const schedule = makeFiringSchedule({ ...inputs.flue.schedule, offMassFlow: inputs.flue.offMassFlow });
+  const schedule = firingScheduleOf(inputs);
   const gas = flueGasPropertyLookup(inputs);
   const ctx: DriverContext = {
     inputs,

@@ -82,11 +82,24 @@ export function evaluateDrivers(ctx: DriverContext, tRun: number, out: Drivers):
   }
 
   // (a warm-up run starts at firing start, so the schedule applies from its first instant)
-  const f = ctx.schedule.at(clock.dayIndex(t), clock.localSecondsOfDay(t));
+  const clockS = clock.localSecondsOfDay(t);
+  const f = ctx.schedule.at(localDateIndex(t, clockS), clockS);
   out.inletTemperatureK = f.inletTemperatureK;
   out.massFlow = f.massFlow;
   out.firing = f.firing;
   return out;
+}
+
+/**
+ * Index of the LOCAL date at run time `t` (0 on the run's first date) from the local clock reading
+ * `clockS` there: run time minus the clock reading is local midnight of that date, give or take the
+ * daylight-saving shifts since the start (an hour or two, never half a day), so rounding to whole
+ * days gives the date. It differs from the run-day index (⌊t / 86 400 s⌋) in the hour after local
+ * midnight once the clocks have gone forward (a run day is 24 h of run time; see calendar.ts,
+ * localDayIndex, which gives the same index by way of the ISO local time).
+ */
+export function localDateIndex(t: number, clockS: number): number {
+  return Math.round((t - clockS) / SECONDS_PER_DAY);
 }
 
 export function emptyDrivers(): Drivers {

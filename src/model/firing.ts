@@ -52,7 +52,11 @@ export interface FiringState {
 }
 
 export interface FiringSchedule {
-  /** Inlet conditions on day `dayIndex` (0-based, by run day) at local clock time `clockS`. */
+  /**
+   * Inlet conditions on the local date `dayIndex` days after the run's first local date, at local
+   * clock time `clockS` (the drivers pass the local date, which after a daylight-saving change differs
+   * from the run day in the hour after local midnight).
+   */
   at(dayIndex: number, clockS: number): FiringState;
   /**
    * Clock times (s) on day `dayIndex` where the inlet conditions change slope or step: every point,

@@ -9,6 +9,7 @@ import type { OutsideRadiation } from '../physics/outside/boundary.ts';
 import type { Terrain } from '../physics/outside/wind.ts';
 import type { ClearSkyModel } from '../physics/sun/irradiance.ts';
 import type { DaySchedules, FiringPoint } from './firing.ts';
+import type { PlantCalendarSpec } from './calendar.ts';
 
 export interface SiteInput {
   readonly name: string;
@@ -65,6 +66,22 @@ export interface OutsideInput {
   readonly clearSky?: ClearSkyModel;
 }
 
+/** The site a typical-year weather file describes, as its header gives it. */
+export interface WeatherFileSite {
+  /** Station or place name. */
+  readonly name: string;
+  /** Station identifier (USAF for TMY3, WMO for EPW), as written. */
+  readonly stationId: string;
+  /** Latitude, degrees north (south negative). */
+  readonly latitudeDeg: number;
+  /** Longitude, degrees east (west negative). */
+  readonly longitudeDeg: number;
+  /** Elevation above sea level, m. */
+  readonly elevationM: number;
+  /** Offset of the file's local standard time from UTC, hours (e.g. +1 for Central European Time). */
+  readonly utcOffsetHours: number;
+}
+
 /**
  * The weather the run sees: a source that answers the outside-air state at any instant (parsed or
  * built once, when the inputs are validated), and what it is, for reports.
@@ -82,7 +99,18 @@ export type WeatherInput =
       readonly dewPointK: number;
       readonly source: WeatherSource;
     }
-  | { readonly kind: 'file'; readonly fileName: string; readonly referenceHeightM: number; readonly source: WeatherSource }
+  | {
+      readonly kind: 'file';
+      readonly fileName: string;
+      readonly referenceHeightM: number;
+      readonly source: WeatherSource;
+      /** The file's format (an hourly CSV of this tool's columns when absent). */
+      readonly format?: 'csv' | 'EPW' | 'TMY3';
+      /** A typical-year file's site, as its header gives it. */
+      readonly site?: WeatherFileSite;
+      /** What the reader should know about the file: its site against the scenario's, rows filled by a model (sentences). */
+      readonly notes?: { readonly warnings: readonly string[]; readonly assumptions: readonly string[] };
+    }
   /** Any weather source built in code (library use, tests). */
   | { readonly kind: 'source'; readonly source: WeatherSource };
 
@@ -99,9 +127,12 @@ export interface GasCompositionInput {
   readonly SO3: number;
 }
 
+/** Firing: points for every day (`daily`), in turn per day (`perDay`), or a plant calendar by local date. */
+export type FlueSchedule = DaySchedules | { readonly calendar: PlantCalendarSpec };
+
 export interface FlueInput {
-  /** Firing points for every day (`daily`) or in turn per day (`perDay`). */
-  readonly schedule: DaySchedules;
+  /** Firing points for every day (`daily`), in turn per day (`perDay`), or a plant calendar (`calendar`). */
+  readonly schedule: FlueSchedule;
   /** Mass flow floor while off (natural draft), kg/s. */
   readonly offMassFlow?: number;
   readonly composition: GasCompositionInput;
@@ -144,6 +175,30 @@ export interface LimitsInput {
   readonly acidDewMarginK?: number;
   /** Required margin of the inner surface above the water dew point, K. */
   readonly waterDewMarginK?: number;
+  /** Annual runs: most hours a year the inner surface may spend below the acid dew point at any height, h. */
+  readonly acidDewHoursPerYear?: number;
+  /** Annual runs: most hours a year below the water dew point at any height, h. */
+  readonly waterDewHoursPerYear?: number;
+  /**
+   * Annual runs: thermal cycles (rainflow) of the temperature difference across a layer or the whole
+   * wall with a range above `rangeK`; counted per layer and height, and, with `count`, at most that
+   * many a year allowed.
+   */
+  readonly cyclesAbove?: { readonly rangeK: number; readonly count?: number };
+}
+
+/**
+ * An annual run: a year (or a range of dates) of local days from `firstDay` to `lastDay`,
+ * inclusive, with annual statistics (monthly and yearly figures, thermal cycles). Read by the
+ * analysis and output layers; the model runs `run.length` days and ignores it.
+ */
+export interface AnnualInput {
+  /** First local date, `YYYY-MM-DD` (the site's start date). */
+  readonly firstDay: string;
+  /** Last local date, `YYYY-MM-DD`, inclusive. */
+  readonly lastDay: string;
+  /** How the span was asked for: `run.days: year`, or `run.last_day`. */
+  readonly given: 'year' | 'last-day';
 }
 
 /**
@@ -177,4 +232,6 @@ export interface ModelInputs {
   readonly limits: LimitsInput;
   /** What the run's per-instant files hold (default: every instant in both). */
   readonly output?: OutputInput;
+  /** Present for an annual run (see AnnualInput). */
+  readonly annual?: AnnualInput;
 }

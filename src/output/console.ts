@@ -2,7 +2,7 @@
  * The console result sheet: verdicts first, then the figures behind them, then the cautions.
  * Plain text, fixed-width columns, readable in any terminal and in a CI log.
  */
-import type { Summary, Verdict } from '../analysis/summary.ts';
+import type { AnnualSummary, Summary, Verdict } from '../analysis/summary.ts';
 import type { Comparison } from '../analysis/compare.ts';
 import { decimals, isoMinute, MISSING } from './format.ts';
 
@@ -31,7 +31,7 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
     ...table(
       [
         ['', 'limit', 'found', 'allowed', 'unit', 'when', 'height m'],
-        ...s.verdicts.map((v) => [STATUS_WORD[v.status], v.title, num(v.governing_value), num(v.limit_value), v.unit, hhmm(v.time_local), num(v.height_m)]),
+        ...[...s.verdicts, ...(s.annual?.verdicts ?? [])].map((v) => [STATUS_WORD[v.status], v.title, num(v.governing_value), num(v.limit_value), v.unit, hhmm(v.time_local), num(v.height_m)]),
       ],
       ['l', 'l', 'r', 'r', 'l', 'l', 'r'],
     ).map((l) => `  ${l}`),
@@ -112,6 +112,7 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
     const heat = s.daily.reduce((sum, d) => sum + (d.heat_loss_kwh ?? 0), 0);
     lines.push(`  over ${s.daily.length} days: ${num(heat, 0)} kWh lost in all; hottest shell ${num(hottest.shell_max_c)} °C on day ${hottest.day} (every day in summary.json, daily)`);
   }
+  if (s.annual) lines.push('', ...annualLines(s.annual));
   if (s.run.periodic_requested)
     lines.push(`  periodic state ${s.run.periodic_reached ? 'reached' : 'NOT reached'} after ${s.run.days_simulated} days (last change ${num(s.run.periodic_last_change_k, 3)} K, tolerance ${num(s.run.periodic_tolerance_k, 3)} K)`);
   if (s.assumptions.length) {
@@ -133,6 +134,41 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
   }
   if (timing) lines.push(`Computed and written in ${decimals(timing.seconds, 1)} s`);
   lines.push(rule);
+  return lines;
+}
+
+/** The annual section of the sheet: the year's hours below the dew points, heat, month by month, and the thermal cycles. */
+function annualLines(a: AnnualSummary): string[] {
+  const lines: string[] = [];
+  const acid = a.hours_below_acid_dew.length > 0;
+  const top = (rows: readonly { height_m: number; hours: number }[]) => (rows.length ? `${num(rows[rows.length - 1]!.hours, 0)} h at the top, ${num(rows[0]!.hours, 0)} h at the bottom` : MISSING);
+  lines.push(`THE YEAR  ${a.first_day} to ${a.last_day}, ${a.days} days${a.full_year ? '' : ' (less than a year)'}`);
+  if (acid) lines.push(`  hours below acid dew point   ${top(a.hours_below_acid_dew)}`);
+  lines.push(`  hours below water dew point  ${top(a.hours_below_water_dew)}`);
+  lines.push(`  heat lost to outside ${num(a.heat_loss_kwh / 1000, 1)} MWh (from the gas ${num(a.gas_to_wall_kwh / 1000, 1)} MWh)`);
+  lines.push(`  hottest shell ${num(a.peak_shell_c)} °C (${hhmm(a.peak_shell_time)}, ${num(a.peak_shell_height_m)} m); hottest lining ${num(a.peak_lining_c)} °C (${hhmm(a.peak_lining_time)}); coldest inner surface ${num(a.min_inner_surface_c)} °C (${hhmm(a.min_inner_surface_time)})`);
+  const month = (rows: readonly { hours: number }[]) => (rows.length ? num(rows[rows.length - 1]!.hours, 0) : MISSING);
+  lines.push(
+    ...table(
+      [
+        ['month', 'days', ...(acid ? ['h < acid dew (top)'] : []), 'h < water dew (top)', 'heat MWh', 'shell max °C', 'lining max °C', 'inner min °C'],
+        ...a.months.map((m) => [m.month, String(m.days), ...(acid ? [month(m.hours_below_acid_dew)] : []), month(m.hours_below_water_dew), num(m.heat_loss_kwh / 1000, 1), num(m.shell_max_c), num(m.lining_max_c), num(m.inner_surface_min_c)]),
+      ],
+      ['l', 'r', 'r', 'r', 'r', 'r', 'r', 'r'],
+    ).map((l) => `  ${l}`),
+  );
+  const t = a.cycles.threshold_k;
+  lines.push(`  thermal cycles (rainflow, ASTM E1049; ΔT sampled every ${num(a.cycles.sampled_every_min, 0)} min; at the height with the most${t === null ? ' (largest range)' : ''})`);
+  lines.push(
+    ...table(
+      [
+        ['across', 'height m', 'cycles', ...(t === null ? [] : [`above ${num(t, 0)} K`]), 'largest range K'],
+        ...a.cycles.across.map((c) => [c.across, num(c.governing_height_m), num(c.cycles, 1), ...(t === null ? [] : [num(c.cycles_above_threshold, 1)]), num(c.largest_range_k)]),
+      ],
+      ['l', 'r', 'r', 'r', 'r'],
+    ).map((l) => `    ${l}`),
+  );
+  lines.push('  (every month, height and range bin in summary.json annual, monthly.csv and cycles.csv)');
   return lines;
 }
 

@@ -5,6 +5,7 @@
  * NOT SET), never shown by colour alone. Inputs are SI/kelvin; this edge converts for display.
  */
 import type { ModelInputs, FiringPointInput, LayerInput } from '../model/inputs.ts';
+import type { PlantCalendarSpec, WeekPattern } from '../model/calendar.ts';
 import type { Summary, Verdict, WarmupAtHeight } from '../analysis/summary.ts';
 import { correlationsInUse } from './modelDescription.ts';
 import { celsius as toC, clockFromSeconds as clock, fixed as num, isoMinute as when, MISSING } from './format.ts';
@@ -63,11 +64,22 @@ function weatherText(inputs: ModelInputs): string {
   return 'Weather supplied in code (library use).';
 }
 
-function scheduleRows(inputs: ModelInputs): { caption: string; rows: string[] } {
+function scheduleRows(inputs: ModelInputs): { caption: string; dayHeader: string | null; rows: string[] } {
   const sch = inputs.flue.schedule;
-  const row = (p: FiringPointInput, day?: number) => `<tr>${day === undefined ? '' : td(String(day + 1))}${td(clock(p.clockS))}${td(num(toC(p.inletTemperatureK)), 'n')}${td(num(p.massFlow, 3), 'n')}</tr>`;
-  if ('daily' in sch) return { caption: 'The same schedule every day; linear between points.', rows: sch.daily.map((p) => row(p)) };
-  return { caption: 'One schedule per day, in turn; linear between points.', rows: sch.perDay.flatMap((pts, d) => pts.map((p) => row(p, d))) };
+  const row = (p: FiringPointInput, day?: string) => `<tr>${day === undefined ? '' : td(esc(day))}${td(clock(p.clockS))}${td(num(toC(p.inletTemperatureK)), 'n')}${td(num(p.massFlow, 3), 'n')}</tr>`;
+  if ('daily' in sch) return { caption: 'The same schedule every day; linear between points.', dayHeader: null, rows: sch.daily.map((p) => row(p)) };
+  if ('perDay' in sch) return { caption: 'One schedule per day, in turn; linear between points.', dayHeader: 'Day', rows: sch.perDay.flatMap((pts, d) => pts.map((p) => row(p, String(d + 1)))) };
+  const c = sch.calendar;
+  return { caption: `A plant calendar by local date; linear between points. ${calendarWords(c)}`, dayHeader: 'Day-schedule', rows: Object.entries(c.days).flatMap(([name, pts]) => pts.map((p) => row(p, name))) };
+}
+
+/** The rules of a plant calendar in words: the week, the seasons and the shutdowns. */
+function calendarWords(c: PlantCalendarSpec): string {
+  const week = (w: WeekPattern) => Object.entries(w).map(([days, name]) => `${days} ${name}`).join(', ');
+  const parts = [`Week: ${week(c.week)}.`];
+  for (const s of c.seasons ?? []) parts.push(`Season ${s.name} (${s.from} to ${s.to}): ${[s.week ? week(s.week) : '', s.flowScale !== undefined ? `flows × ${num(s.flowScale, 2)}` : ''].filter((x) => x).join('; ')}.`);
+  for (const s of c.shutdowns ?? []) parts.push(`Shutdown ${s.name} (${s.from} to ${s.to}): ${c.shutdownDay ?? ''}.`);
+  return esc(parts.join(' '));
 }
 
 function scenarioSection(summary: Summary, inputs: ModelInputs): string {
@@ -77,7 +89,6 @@ function scenarioSection(summary: Summary, inputs: ModelInputs): string {
   const comp = inputs.flue.composition;
   const compText = (['N2', 'O2', 'CO2', 'H2O', 'SO2', 'SO3'] as const).map((g) => `${g} ${num(comp[g] * 100, g === 'SO3' || g === 'SO2' ? 4 : 2)} %`).join(', ');
   const sched = scheduleRows(inputs);
-  const perDay = 'perDay' in inputs.flue.schedule;
   const rad = inputs.outside.radiation;
   const radText = rad.kind === 'sky-ground' ? `half to the sky (${rad.sky === 'swinbank' ? 'Swinbank' : 'Berdahl–Martin'} sky temperature), half to the ground` : rad.kind === 'surroundings' ? `to surroundings at ${num(toC(rad.temperatureK))} °C` : 'none';
   const run = inputs.run;
@@ -105,22 +116,23 @@ ${summary.scenario.description ? `<p class="description">${esc(summary.scenario.
 ${table(['#', 'Layer', 'Material', 'Kind', 'Thickness (mm)', 'k (W/(m K))', 'Density (kg/m³)', 'Max service (°C)', 'Contact resistance to next (m² K/W)'], inputs.layers.map(layerRow))}
 <h3>Firing schedule</h3>
 <p class="note">${sched.caption}</p>
-${table([...(perDay ? ['Day'] : []), 'Local time', 'Inlet gas (°C)', 'Mass flow (kg/s)'], sched.rows, 'narrow')}
+${table([...(sched.dayHeader ? [sched.dayHeader] : []), 'Local time', 'Inlet gas (°C)', 'Mass flow (kg/s)'], sched.rows, 'narrow')}
 </section>`;
 }
 
 function verdictSection(summary: Summary): string {
-  const rows = summary.verdicts.map((v) => {
+  const all = [...summary.verdicts, ...(summary.annual?.verdicts ?? [])];
+  const rows = all.map((v) => {
     const limit = v.limit_value === null ? 'not set' : `${num(v.limit_value, 2)} ${esc(v.unit)}`;
     const gov = v.governing_value === null ? MISSING : `${num(v.governing_value, 2)} ${esc(v.unit)}`;
     return `<tr class="verdict status-${v.status}" data-limit="${esc(v.limit)}" data-status="${esc(v.status)}">${td(`<span class="badge">${STATUS_MARK[v.status]} ${STATUS_WORD[v.status]}</span>`, 'status')}${td(`${esc(v.title)}<div class="note">${esc(v.detail)}</div>`)}${td(gov, 'n')}${td(limit, 'n')}${td(esc(when(v.time_local)))}${td(v.height_m === null ? MISSING : num(v.height_m, 1), 'n')}</tr>`;
   });
-  const fails = summary.verdicts.filter((v) => v.status === 'fail').length;
+  const fails = all.filter((v) => v.status === 'fail').length;
   const overall = fails === 0 ? `<p class="overall ok"><strong>ALL SET LIMITS PASS.</strong></p>` : `<p class="overall bad"><strong>${fails === 1 ? 'ONE LIMIT FAILS' : `${fails} LIMITS FAIL`}.</strong></p>`;
   return `<section id="verdicts"><h2>Verdicts</h2>
 ${overall}
 ${table(['Status', 'Limit', 'Governing figure', 'Limit value', 'When (local)', 'Height (m)'], rows, 'verdicts')}
-<p class="note">Figures cover ${esc(summary.run.evaluated_over)}. For warm-up studies the dew-point rows give the minutes from firing until the slowest height stays above the dew point plus its margin.</p>
+<p class="note">Figures cover ${esc(summary.run.evaluated_over)}${summary.annual ? `; the annual limits (hours a year, cycles) cover every day from ${esc(summary.annual.first_day)} to ${esc(summary.annual.last_day)}` : ''}. For warm-up studies the dew-point rows give the minutes from firing until the slowest height stays above the dew point plus its margin.</p>
 </section>`;
 }
 
@@ -210,6 +222,36 @@ function daysSection(summary: Summary): string {
   return `<section id="days"><h2>Day by day</h2>
 <p>Over the ${days.length} days reported: the shell reaches ${num(hottest.shell_max_c)} °C (day ${hottest.day}); the lowest margin above the ${acid ? 'acid' : 'water'} dew point is ${num(acid ? lowest.lowest_acid_dew_margin_k : lowest.lowest_water_dew_margin_k)} K (day ${lowest.day}); ${num(heat, 0)} kWh are lost to the outside in all. Every day's figures are in summary.json (<code>daily</code>).</p>
 ${days.length <= MAX_DAY_ROWS ? table(['Day', 'Date', 'Shell (°C)', 'Lining (°C)', 'Inner surface (°C)', `Lowest ${acid ? 'acid' : 'water'} dew margin (K)`, 'Heat lost (kWh)'], rows) : ''}
+</section>`;
+}
+
+/** An annual run: the year's hours below the dew points, heat, months, and thermal cycles. */
+function yearSection(summary: Summary): string {
+  const a = summary.annual;
+  if (!a) return '';
+  const acid = a.hours_below_acid_dew.length > 0;
+  const heights = a.hours_below_water_dew.map((w, j) => `<tr>${td(num(w.height_m, 1), 'n')}${acid ? td(num(a.hours_below_acid_dew[j]!.hours, 1), 'n') : ''}${td(num(w.hours, 1), 'n')}</tr>`);
+  const topOf = (rows: readonly { hours: number }[]) => (rows.length ? num(rows[rows.length - 1]!.hours, 1) : MISSING);
+  const months = a.months.map(
+    (m) =>
+      `<tr>${td(esc(m.month))}${td(String(m.days), 'n')}${acid ? td(topOf(m.hours_below_acid_dew), 'n') : ''}${td(topOf(m.hours_below_water_dew), 'n')}${td(num(m.heat_loss_kwh / 1000, 2), 'n')}${td(`${num(m.shell_min_c)}–${num(m.shell_max_c)}`, 'n')}${td(`${num(m.lining_min_c)}–${num(m.lining_max_c)}`, 'n')}${td(num(m.inner_surface_min_c), 'n')}</tr>`,
+  );
+  const t = a.cycles.threshold_k;
+  const cycles = a.cycles.across.map(
+    (c) =>
+      `<tr>${td(esc(c.across))}${td(num(c.governing_height_m, 1), 'n')}${td(num(c.cycles, 1), 'n')}${t === null ? '' : td(num(c.cycles_above_threshold, 1), 'n')}${td(num(c.largest_range_k, 1), 'n')}${td(`${esc(c.histogram.filter((b) => b.cycles > 0).map((b) => `${num(b.from_k, c.bin_width_k < 1 ? 1 : 0)}–${num(b.to_k, c.bin_width_k < 1 ? 1 : 0)} K: ${num(b.cycles, 1)}`).join('; '))}`)}</tr>`,
+  );
+  // (starts with a line break: it follows the days section on its line, so other runs' reports keep their bytes)
+  return `
+<section id="year"><h2>The year</h2>
+<p>From ${esc(a.first_day)} to ${esc(a.last_day)}, ${a.days} days${a.full_year ? '' : ' (less than a year: yearly figures cover these days only)'}. Heat lost to the outside, net of sun: <strong>${num(a.heat_loss_kwh / 1000, 1)} MWh</strong> (from the gas ${num(a.gas_to_wall_kwh / 1000, 1)} MWh). Hottest shell ${num(a.peak_shell_c)} °C (${esc(when(a.peak_shell_time))}, ${num(a.peak_shell_height_m, 1)} m); hottest lining ${num(a.peak_lining_c)} °C (${esc(when(a.peak_lining_time))}); coldest inner surface ${num(a.min_inner_surface_c)} °C (${esc(when(a.min_inner_surface_time))}).</p>
+<h3>Hours below the dew points over the run, by height</h3>
+${table(['Height (m)', ...(acid ? ['Below the acid dew point (h)'] : []), 'Below the water dew point (h)'], heights, 'narrow')}
+<h3>Month by month (hours at the top)</h3>
+${table(['Month', 'Days', ...(acid ? ['Below acid dew (h)'] : []), 'Below water dew (h)', 'Heat lost (MWh)', 'Shell (°C)', 'Lining (°C)', 'Inner surface min (°C)'], months)}
+<h3>Thermal cycles</h3>
+<p class="note">Rainflow counting (ASTM E1049) of the temperature difference across the whole wall and across each layer, sampled every ${num(a.cycles.sampled_every_min, 0)} min (peaks between instants are missed); each row at the height with the most cycles${t === null ? ' (the largest range)' : ` above ${num(t, 0)} K`}. A histogram of ranges is the input to a fatigue judgement, not a judgement itself. Every height and bin: cycles.csv.</p>
+${table(['Across', 'Height (m)', 'Cycles', ...(t === null ? [] : [`Above ${num(t, 0)} K`]), 'Largest range (K)', 'Ranges (cycles)'], cycles)}
 </section>`;
 }
 
@@ -325,7 +367,7 @@ ${verdictSection(summary)}
 ${keyFiguresSection(summary)}
 ${sectorsSection(summary)}
 ${warmupSection(summary)}
-${daysSection(summary)}
+${daysSection(summary)}${yearSection(summary)}
 ${chartsSection(charts)}
 ${assumptionsSection(summary)}
 ${listSection('warnings', 'Warnings from this run', summary.warnings, 'None.')}

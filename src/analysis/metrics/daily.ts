@@ -1,7 +1,8 @@
 /**
  * Figures of every simulated day, gathered while the run goes (a sink of the simulation, so a year
  * needs no more memory than a day): the range of the shell (outer surface), of the lining (every
- * node of the flue-side layer) and of the inner surface, the lowest margins above the water and
+ * node of the flue-side layer) and of the inner surface over every column of the wall (each segment
+ * and, with sectors, each sector), the lowest margins above the water and
  * acid dew points at any height, and the day's heat from its energy account.
  *
  * A day is the closed interval from its start to its end (see DaySplitter), the same instants the
@@ -50,8 +51,9 @@ export class DailyExtremes implements InstantSink {
     const N = L.nodes;
     const lining = L.layers[0]!;
     const T = view.temperatureK;
-    for (let s = 0; s < L.segments; s++) {
-      const base = s * N;
+    // every column of the wall: each segment and, with sectors, each sector
+    for (let col = 0; col < L.segments * L.sectors; col++) {
+      const base = col * N;
       const inner = T[base]!;
       const shell = T[base + N - 1]!;
       x.innerMin = Math.min(x.innerMin, inner);
@@ -62,6 +64,8 @@ export class DailyExtremes implements InstantSink {
         x.liningMin = Math.min(x.liningMin, T[base + i]!);
         x.liningMax = Math.max(x.liningMax, T[base + i]!);
       }
+    }
+    for (let s = 0; s < L.segments; s++) {
       x.waterMargin = Math.min(x.waterMargin, view.segment.waterDewMarginK[s]!);
       x.acidMargin = Math.min(x.acidMargin, view.segment.acidDewMarginK[s]!);
     }

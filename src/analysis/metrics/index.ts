@@ -8,7 +8,7 @@
 import type { ModelInputs } from '../../model/inputs.ts';
 import type { RunResult, TimeSeries } from '../../model/timeseries.ts';
 import { runAssumptions } from '../assumptions.ts';
-import { AVERAGED_SUN_CAUTION, CAUTIONS, type Summary } from '../summary.ts';
+import { AVERAGED_SUN_CAUTION, CAUTIONS, type AnnualSummary, type Summary } from '../summary.ts';
 import { sectorFigures } from './sectors.ts';
 import { round } from '../rounding.ts';
 import { evaluated, type Evaluated, type Location } from './evaluated.ts';
@@ -37,6 +37,8 @@ export interface SummaryContext {
    * are found from the days the result's series holds.
    */
   readonly daily?: DailyExtremes;
+  /** An annual run's figures (analysis/annual, from the statistics a sink gathered while the run went): the summary's `annual` section. */
+  readonly annual?: AnnualSummary;
 }
 
 /**
@@ -106,7 +108,7 @@ function locations(
 }
 
 /** The summary of a run (summary.json) and where each of its located figures occurs. */
-export function summariseRun({ inputs, result, version, description, daily }: SummaryContext): SummarisedRun {
+export function summariseRun({ inputs, result, version, description, daily, annual }: SummaryContext): SummarisedRun {
   const mode = inputs.run.mode;
   const ev = evaluated(result.series, mode);
   const extremes = wallExtremes(ev);
@@ -118,7 +120,8 @@ export function summariseRun({ inputs, result, version, description, daily }: Su
   const warmup = mode === 'warmup' && result.firingStartT !== null ? warmupTimes(ev, result.firingStartT, inputs.limits) : null;
   const verdictList = verdicts(ev, { mode, limits: inputs.limits, extremes, layers, margins, warmup });
 
-  const warnings = [...result.warnings];
+  const weatherNotes = inputs.weather.kind === 'file' ? inputs.weather.notes : undefined;
+  const warnings = [...(weatherNotes?.warnings ?? []), ...result.warnings];
   if (result.periodic && !result.periodic.reached)
     warnings.push(`the periodic state was NOT reached in ${result.daysSimulated} days (last day-to-day change ${round(result.periodic.lastChangeK, 3)} K > tolerance ${result.periodic.toleranceK} K); figures are for the last simulated day`);
   if (result.retained.truncated)
@@ -152,7 +155,7 @@ export function summariseRun({ inputs, result, version, description, daily }: Su
       nodes_per_segment: ev.N,
     },
     verdicts: verdictList,
-    all_limits_pass: verdictList.every((v) => v.status !== 'fail'),
+    all_limits_pass: [...verdictList, ...(annual?.verdicts ?? [])].every((v) => v.status !== 'fail'),
     ...wallExtremeFigures(ev, extremes),
     positions,
     layers,
@@ -162,6 +165,7 @@ export function summariseRun({ inputs, result, version, description, daily }: Su
     ...heatPerDay(energy),
     warmup,
     daily: dailyFigures(result, daily),
+    ...(annual ? { annual } : {}),
     assumptions: runAssumptions(inputs, result),
     warnings,
     cautions: sectors ? CAUTIONS.filter((x) => x !== AVERAGED_SUN_CAUTION) : CAUTIONS,

@@ -335,6 +335,64 @@ const gas = z
       ctx.issues.push({ code: 'custom', input: v, path: ['excess_air'], message: 'expected the excess air as a fraction from 0 to 5 (0.15 = 15 %) with a fuel' });
   });
 
+/** A local date in a plant calendar: `YYYY-MM-DD` (a one-off date) or `MM-DD` (every year). */
+const calendarDate = (description: string) =>
+  z
+    .string()
+    .meta({ description: `${description}: a local date "YYYY-MM-DD" (once) or "MM-DD" (every year).` })
+    .check((ctx) => {
+      const v = ctx.value;
+      const m = /^(?:(\d{4})-)?(\d{2})-(\d{2})$/.exec(v);
+      // a yearly date is checked in a leap year, so 02-29 passes (it then applies in leap years only)
+      const [y, mo, d] = m ? [m[1] === undefined ? 2024 : Number(m[1]), Number(m[2]), Number(m[3])] : [0, 0, 0];
+      const t = new Date(Date.UTC(y, mo - 1, d));
+      if (!m || t.getUTCFullYear() !== y || t.getUTCMonth() !== mo - 1 || t.getUTCDate() !== d)
+        ctx.issues.push({ code: 'custom', input: v, message: 'expected a calendar date "YYYY-MM-DD" (once) or "MM-DD" (every year)' });
+    });
+
+const dayScheduleName = (description: string) => z.string().min(1).meta({ description: `${description}: the name of a day-schedule in days.` });
+
+const weekPattern = z
+  .strictObject({
+    weekdays: dayScheduleName('Monday to Friday').optional(),
+    weekend: dayScheduleName('Saturday and Sunday').optional(),
+    monday: dayScheduleName('Monday (overrides weekdays)').optional(),
+    tuesday: dayScheduleName('Tuesday').optional(),
+    wednesday: dayScheduleName('Wednesday').optional(),
+    thursday: dayScheduleName('Thursday').optional(),
+    friday: dayScheduleName('Friday').optional(),
+    saturday: dayScheduleName('Saturday (overrides weekend)').optional(),
+    sunday: dayScheduleName('Sunday (overrides weekend)').optional(),
+  })
+  .meta({ description: 'A week as day-schedule names: weekdays (Monday–Friday) and weekend (Saturday, Sunday); a single day overrides its group.' });
+
+const calendarPeriod = {
+  name: z.string().min(1).meta({ description: 'Name of the period, for messages and reports.' }),
+  from: calendarDate('First day of the period (inclusive)'),
+  to: calendarDate('Last day of the period (inclusive; a yearly period with from after to runs over New Year)'),
+};
+
+const calendar = z
+  .strictObject({
+    days: z
+      .record(z.string().regex(/^[A-Za-z0-9][A-Za-z0-9 ._-]*$/, 'expected a name of letters, digits, spaces, ".", "_" or "-"'), z.array(firingPoint).min(1))
+      .meta({ description: 'Day-schedules by name: each a list of firing points against local clock time, as in schedule.daily.' }),
+    week: weekPattern,
+    seasons: z
+      .array(
+        z.strictObject({
+          ...calendarPeriod,
+          week: weekPattern.optional(),
+          flow_scale: z.number().meta({ description: 'Factor on every scheduled mass flow of the season (> 0; for no firing use a shutdown).' }).optional(),
+        }),
+      )
+      .optional()
+      .meta({ description: 'Load seasons: periods with their own week and/or a flow scale; a one-off (dated) season may lie inside a yearly one and then wins.' }),
+    shutdowns: z.array(z.strictObject(calendarPeriod)).optional().meta({ description: 'Shutdowns: periods with no firing (they win over any season).' }),
+    shutdown_day: z.string().min(1).optional().meta({ description: 'The day-schedule used on shutdown days (every flow 0; its gas temperature is that of the cold plant).' }),
+  })
+  .meta({ description: 'Plant calendar by local date: named day-schedules, the usual week, load seasons and shutdowns (instead of schedule).' });
+
 const flue = z.strictObject({
   schedule: z
     .strictObject({
@@ -345,7 +403,9 @@ const flue = z.strictObject({
       const v = ctx.value;
       if ((v.daily === undefined) === (v.per_day === undefined))
         ctx.issues.push({ code: 'custom', input: v, path: [], message: `found ${v.daily ? 'both daily and per_day' : 'neither daily nor per_day'}; expected exactly one of them` });
-    }),
+    })
+    .optional(),
+  calendar: calendar.optional(),
   off_mass_flow: quantity('massFlow', { min: 0, wording: 'a mass flow of zero or more' }, 'Natural-draft flow while the burner is off (floor)').optional(),
   gas,
   properties: z.enum(['mixture', 'air']).default('mixture').meta({ description: 'Gas properties: the mixture (NASA polynomials, Wilke mixing) or air.' }),
@@ -357,15 +417,25 @@ const flue = z.strictObject({
   gas_cooling: z.boolean().default(true).meta({ description: 'Whether the gas cools as it rises (false: every height sees the inlet temperature).' }),
   gas_radiation: z.boolean().default(true).meta({ description: 'Whether the H2O–CO2 flue gas radiates to the lining (weighted sum of grey gases).' }),
   pressure: quantity('pressure', { min: 50_000, max: 120_000, wording: 'a pressure from 50 kPa to 120 kPa' }, 'Absolute pressure in the flue (default: the site pressure)').optional(),
+}).check((ctx) => {
+  const v = ctx.value;
+  if ((v.schedule === undefined) === (v.calendar === undefined))
+    ctx.issues.push({ code: 'custom', input: v, path: [], message: `found ${v.schedule ? 'both schedule and calendar' : 'neither schedule nor calendar'}; expected exactly one of them (a daily schedule, or a plant calendar by date)` });
 });
 
 const run = z.strictObject({
   mode: z.enum(['cycle', 'warmup']).default('cycle'),
   days: z
-    .union([count(1, LIMITS.days, 'days to simulate', 'Days to simulate'), z.literal('until-periodic')], {
-      error: () => `expected ${wholeNumber(1, LIMITS.days, 'days to simulate')}, or "until-periodic" (repeat the first day until the wall's daily cycle settles)`,
+    .union([count(1, LIMITS.days, 'days to simulate', 'Days to simulate'), z.literal('until-periodic'), z.literal('year')], {
+      error: () => `expected ${wholeNumber(1, LIMITS.days, 'days to simulate')}, "until-periodic" (repeat the first day until the wall's daily cycle settles) or "year" (an annual run)`,
     })
-    .default(1),
+    .optional()
+    .meta({ description: 'Days to simulate (default 1), "until-periodic" (repeat the first day until the wall settles), or "year" (an annual run: a year of local days from site.first_day, 365 or 366, with monthly and annual figures).' }),
+  last_day: z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, 'expected a date "YYYY-MM-DD"')
+    .optional()
+    .meta({ description: 'Last simulated day, local date "YYYY-MM-DD" (instead of days): an annual run from site.first_day to this day, inclusive, at most 366 days.' }),
   periodic_tolerance: quantity('temperatureDifference', { min: 0, exclusiveMin: true, wording: 'a positive temperature difference' }, 'Largest day-to-day change of any node for the periodic state').prefault(0.05),
   max_days: count(1, LIMITS.days, 'days', 'Most days to try for the periodic state').default(30),
   output_interval: quantity('duration', { min: 60, max: 6 * 3600, wording: 'an interval from 1 min to 6 h' }, 'Interval between output instants').prefault(10),
@@ -380,8 +450,10 @@ const run = z.strictObject({
 const seriesFile = (file: string) =>
   z
     .enum(['all', 'last-day', 'daily-extremes', 'off'])
-    .default('all')
-    .meta({ description: `What ${file} holds: every output instant (all), the last simulated day (last-day), per day the lowest and highest value of every column (daily-extremes), or no file (off).` });
+    .optional()
+    .meta({
+      description: `What ${file} holds: every output instant (all), the last simulated day (last-day), per day the lowest and highest value of every column (daily-extremes), or no file (off). Default: all; daily-extremes for an annual run (run.days: year or run.last_day).`,
+    });
 const seriesFileInterval = (file: string) =>
   quantity('duration', { min: 60, max: 24 * 3600, wording: 'an interval from 1 min to 24 h' }, `Write ${file} rows only at whole multiples of this after the run's start (with all and last-day; a whole multiple of run.output_interval)`).optional();
 
@@ -398,6 +470,15 @@ const limits = z.strictObject({
   allowable_stress: quantity('stress', { min: 0, exclusiveMin: true, wording: 'a positive stress' }, 'Allowable thermal stress').optional(),
   acid_dew_margin: quantity('temperatureDifference', { min: 0, wording: 'a margin of zero or more' }, 'Required margin of the inner surface above the acid dew point').optional(),
   water_dew_margin: quantity('temperatureDifference', { min: 0, wording: 'a margin of zero or more' }, 'Required margin of the inner surface above the water dew point').optional(),
+  acid_dew_hours_per_year: z.number().min(0).max(8784).optional().meta({ description: 'Annual runs: most hours a year the inner surface may spend below the acid dew point at any height, h (0 to 8784).' }),
+  water_dew_hours_per_year: z.number().min(0).max(8784).optional().meta({ description: 'Annual runs: most hours a year below the water dew point at any height, h (0 to 8784).' }),
+  cycles_above: z
+    .strictObject({
+      range: quantity('temperatureDifference', { min: 0, exclusiveMin: true, wording: 'a positive temperature difference' }, 'Range of the temperature difference across a layer above which a thermal cycle counts'),
+      count: count(0, 1e9, 'cycles a year', 'Most such cycles a year at any height, in any layer or across the whole wall').optional(),
+    })
+    .optional()
+    .meta({ description: 'Annual runs: thermal cycles (rainflow, ASTM E1049) of the temperature difference across each layer and the whole wall with a range above `range`, counted; with `count`, a limit on them per year.' }),
 });
 
 /** Names become folder names: short, and only characters every file system takes. */

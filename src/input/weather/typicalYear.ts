@@ -29,26 +29,14 @@ import { TZDate } from '@date-fns/tz';
 import { celsiusToKelvin } from '../../physics/constants.ts';
 import { STANDARD_WIND_HEIGHT_M } from '../../physics/outside/wind.ts';
 import type { AirState } from '../../physics/outside/weather.ts';
+import type { WeatherFileSite } from '../../model/inputs.ts';
 import { DEW_POINT_TOLERANCE_K, WeatherFileError, type WeatherFileSource } from './csvFile.ts';
 
 /** Rows of a typical year: 365 days × 24 hours (no 29 February). */
 export const HOURS_PER_TYPICAL_YEAR = 8760;
 
-/** The site a weather file describes, as its header gives it. */
-export interface TypicalYearSite {
-  /** Station or place name. */
-  readonly name: string;
-  /** Station identifier (USAF for TMY3, WMO for EPW), as written. */
-  readonly stationId: string;
-  /** Latitude, degrees north (south negative). */
-  readonly latitudeDeg: number;
-  /** Longitude, degrees east (west negative). */
-  readonly longitudeDeg: number;
-  /** Elevation above sea level, m. */
-  readonly elevationM: number;
-  /** Offset of the file's local standard time from UTC, hours (e.g. +1 for Central European Time). */
-  readonly utcOffsetHours: number;
-}
+/** The site a weather file describes, as its header gives it (the model's WeatherFileSite). */
+export type TypicalYearSite = WeatherFileSite;
 
 /** How many rows used a modelled value because the file's value was missing, per quantity. */
 export interface TypicalYearFallbacks {

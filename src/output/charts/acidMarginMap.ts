@@ -8,10 +8,10 @@ import type { TimeSeries } from '../../model/timeseries.ts';
 import type { Summary } from '../../analysis/summary.ts';
 import { evaluationInstants } from '../../analysis/metrics/index.ts';
 import { celsius, fixed } from '../format.ts';
-import { chartTypography, FONT_FAMILY, INK, MARGIN_CLASS_COLORS, MARGIN_MAP_BOUNDARY, MARGIN_MAP_HATCH } from './look.ts';
+import { chartTypography, FONT_FAMILY, INK, MARGIN_CLASS_COLORS, MARGIN_MAP_BOUNDARY, MARGIN_MAP_HATCH, type Typography } from './look.ts';
 import { hourStep, localHours, niceStep } from './scales.ts';
 import { axis, baseOptions, timeAxisTitle, type ChartBuildOptions, type Point } from './parts.ts';
-import type { CellHatch } from './render.ts';
+import type { CellHatch, CellsOptions } from './render.ts';
 
 export interface MarginClass {
   readonly key: keyof typeof MARGIN_CLASS_COLORS;
@@ -80,17 +80,7 @@ export function acidMarginMap(series: TimeSeries, summary: Summary, inputs: Mode
     }
   const x0 = xEdges[0]!;
   const x1 = xEdges[xEdges.length - 1]!;
-  // the key: one empty dataset per class, drawn by the legend as a filled square
-  const datasets = classes.map((c) => ({
-    type: 'scatter' as const,
-    label: c.label,
-    data: [] as Point[],
-    pointStyle: 'rect' as const,
-    pointRadius: f.pointRadius * 1.4,
-    backgroundColor: c.color,
-    borderColor: INK,
-    borderWidth: 1,
-  }));
+  const datasets = marginKey(classes, f);
   const dewName = acid ? 'acid' : 'water';
   const lowest = acid ? summary.lowest_acid_dew_margin_k : summary.lowest_water_dew_margin_k;
   const subtitle = `Dew point ${fixed(dewC)} °C; required margin ${fixed(required, 0)} K; lowest margin ${fixed(lowest)} K; ${unsafeCells === 0 ? 'no cell below the dew point' : 'outlined cells are BELOW the dew point'}`;
@@ -105,13 +95,32 @@ export function acidMarginMap(series: TimeSeries, summary: Summary, inputs: Mode
         x: axis(timeAxisTitle(summary), f, { min: x0, max: x1, ticks: { stepSize: hourStep(x1 - x0) }, grid: { display: false } }),
         y: axis('Height above the stack base (m)', f, { min: yb.min, max: yb.max, ticks: { stepSize: niceStep(H, 8) }, grid: { display: false } }),
       },
-      plugins: {
-        ...base.plugins,
-        legend: { ...base.plugins.legend, labels: { ...base.plugins.legend.labels, boxWidth: Math.round(18 * f.scale), font: { size: Math.max(13, Math.round(13 * f.scale)), family: FONT_FAMILY } } },
-        stackdayCells: { xEdges, yEdges, colors, hatch, flagged, hatchColors: MARGIN_MAP_HATCH, boundaryColor: MARGIN_MAP_BOUNDARY },
-      },
+      plugins: marginMapPlugins(base, f, { xEdges, yEdges, colors, hatch, flagged }),
     },
   } as ChartConfiguration;
+}
+
+/** The key of a margin map: one empty dataset per class, drawn by the legend as a filled square. */
+export function marginKey(classes: readonly MarginClass[], f: Typography) {
+  return classes.map((c) => ({
+    type: 'scatter' as const,
+    label: c.label,
+    data: [] as Point[],
+    pointStyle: 'rect' as const,
+    pointRadius: f.pointRadius * 1.4,
+    backgroundColor: c.color,
+    borderColor: INK,
+    borderWidth: 1,
+  }));
+}
+
+/** The plugins of a margin map: the base ones, a legend of small squares, and the cells with their hatching and the outline of unsafe cells. */
+export function marginMapPlugins(base: ReturnType<typeof baseOptions>, f: Typography, cells: Pick<CellsOptions, 'xEdges' | 'yEdges' | 'colors' | 'hatch' | 'flagged'>) {
+  return {
+    ...base.plugins,
+    legend: { ...base.plugins.legend, labels: { ...base.plugins.legend.labels, boxWidth: Math.round(18 * f.scale), font: { size: Math.max(13, Math.round(13 * f.scale)), family: FONT_FAMILY } } },
+    stackdayCells: { ...cells, hatchColors: MARGIN_MAP_HATCH, boundaryColor: MARGIN_MAP_BOUNDARY },
+  };
 }
 
 /** Cell edges around centres: midpoints between neighbours, with the given outer ends. */

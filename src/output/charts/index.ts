@@ -18,6 +18,11 @@ import { warmupInnerSurface } from './warmupInnerSurface.ts';
 import { renderChartPng } from './render.ts';
 import { shellRoundTheCircumference } from './shellRound.ts';
 import { shellSunnyAndShadySides } from './sectorsThroughDay.ts';
+import { annualMarginMap } from './annualMarginMap.ts';
+import { monthlyDewHours } from './monthlyDewHours.ts';
+import { monthlyHeatLoss } from './monthlyHeatLoss.ts';
+import { cycleHistogram } from './cycleHistogram.ts';
+import type { AnnualParts } from '../../analysis/annual/index.ts';
 import { decimals } from '../format.ts';
 
 export { renderChartPng } from './render.ts';
@@ -31,6 +36,11 @@ export { acidMarginMap, marginClasses, marginClassOf, type MarginClass } from '.
 export { gasAlongHeight, type GasAlongHeightOptions } from './gasAlongHeight.ts';
 export { outsideHeatFlows } from './outsideHeatFlows.ts';
 export { warmupInnerSurface } from './warmupInnerSurface.ts';
+export { annualMarginMap } from './annualMarginMap.ts';
+export { monthlyDewHours } from './monthlyDewHours.ts';
+export { monthlyHeatLoss } from './monthlyHeatLoss.ts';
+export { cycleHistogram } from './cycleHistogram.ts';
+export { monthLabel } from './bars.ts';
 
 export interface RenderAllChartsOptions {
   /** Chart width, px (default 1000). */
@@ -41,6 +51,8 @@ export interface RenderAllChartsOptions {
   readonly heightsToPlot?: readonly number[];
   /** Where the summary's figures occur (from summariseRun); found again from the series when absent. */
   readonly locations?: SummaryLocations;
+  /** An annual run's statistics (the margin grid and cycle counts): with them and summary.annual, the annual charts are drawn too. */
+  readonly annual?: AnnualParts | null;
 }
 
 export interface RenderedChart {
@@ -86,6 +98,12 @@ export function renderAllCharts(series: TimeSeries, summary: Summary, inputs: Mo
   if (series.sectors > 1 && options.locations && sides) {
     configs.push({ name: 'shell-round-the-circumference', config: shellRoundTheCircumference(series, summary, inputs, options.locations.peakShell, common) });
     configs.push({ name: 'shell-sunny-and-shady-sides', config: shellSunnyAndShadySides(series, summary, inputs, sides, common) });
+  }
+  if (summary.annual && options.annual) {
+    configs.push({ name: 'year-margin-map', config: annualMarginMap(summary, options.annual, inputs, size) });
+    configs.push({ name: 'monthly-dew-hours', config: monthlyDewHours(summary.annual, size) });
+    configs.push({ name: 'monthly-heat-loss', config: monthlyHeatLoss(summary.annual, size) });
+    configs.push({ name: 'cycle-histogram', config: cycleHistogram(summary.annual, options.annual, size) });
   }
   return configs.map(({ name, config }) => ({ name, fileName: `${name}.png`, title: chartTitle(config), config, png: renderChartPng(config, size) }));
 }

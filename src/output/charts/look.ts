@@ -112,3 +112,11 @@ export const WARMUP_LOOKS = {
 /** Hatching and outline of the margin map's cells. */
 export const MARGIN_MAP_HATCH = { diagonal: 'rgba(60,40,0,0.55)', cross: 'rgba(255,255,255,0.8)' } as const;
 export const MARGIN_MAP_BOUNDARY = '#000000';
+
+/** Bars of the annual charts: hours below the acid and the water dew points (dark and light, so they read in greyscale), heat lost, and the month lines of the annual map. */
+export const ANNUAL_LOOKS = {
+  acidHours: { fill: LOOK.acidDew.color, border: INK },
+  waterHours: { fill: LOOK.waterDewMargin.color, border: INK },
+  heatLoss: { fill: LOOK.gasToWall.color, border: INK },
+  monthLine: { color: 'rgba(31,35,40,0.55)', dash: [4, 3] },
+} as const;

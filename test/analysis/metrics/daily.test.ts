@@ -94,3 +94,30 @@ describe('daily figures of a multi-day run', () => {
     expect(last.heat_loss_kwh).toBeCloseTo(summary.heat_loss_kwh_per_day, 9);
   });
 });
+
+describe('daily figures of a wall cut into sectors', () => {
+  const base = loadScenarioFile('scenarios/demo.yaml').inputs;
+  // the demo cut to 2 segments and 4 sectors (the sun-facing side runs hotter), one day at 1 h
+  const inputs: ModelInputs = { ...base, stack: { ...base.stack, segments: 2, sectors: 4 }, run: { ...base.run, length: { kind: 'days', days: 1 }, outputInterval: 3600 } };
+  const daily = new DailyExtremes();
+  const result = simulate(inputs, { sinks: [daily] });
+  const [f] = daily.figures(result.energy.byDay);
+  const s = result.series;
+
+  it('take the extremes over every sector of every segment (a direct search of the whole wall)', () => {
+    const N = s.nodes;
+    const perInstant = s.segments * s.sectors * N;
+    let shellMax = -Infinity;
+    let innerMin = Infinity;
+    for (let k = 0; k < s.t.length; k++)
+      for (let col = 0; col < s.segments * s.sectors; col++) {
+        shellMax = Math.max(shellMax, s.temperatureK[k * perInstant + col * N + N - 1]!);
+        innerMin = Math.min(innerMin, s.temperatureK[k * perInstant + col * N]!);
+      }
+    // rounding to 0.01 in the summary
+    expect(Math.abs(f!.shell_max_c - (shellMax - 273.15))).toBeLessThanOrEqual(0.005 + 1e-9);
+    expect(Math.abs(f!.inner_surface_min_c - (innerMin - 273.15))).toBeLessThanOrEqual(0.005 + 1e-9);
+    // and agree with the summary's peak over the same day (searched over every column)
+    expect(f!.shell_max_c).toBeCloseTo(summarise({ inputs, result, version: 'test', daily }).peak_shell_c, 9);
+  });
+});

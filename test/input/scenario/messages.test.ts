@@ -88,9 +88,9 @@ describe('choices: every allowed form', () => {
     expect(edited((s) => (s.stack.layers[0].cells = 1000))).toEqual(['stack.layers[0].cells: found 1000; expected "auto" or a whole number from 1 to 200 (cells across the layer)']);
   });
 
-  it('days: forever names the whole numbers of days and "until-periodic"', () => {
+  it('days: forever names the whole numbers of days , "until-periodic" and "year"', () => {
     const [line] = edited((s) => (s.run.days = 'forever'));
-    expect(line).toMatch(/^run\.days: found "forever"; expected a whole number from 1 to 366 \(days to simulate\), or "until-periodic"/);
+    expect(line).toMatch(/^run\.days: found "forever"; expected a whole number from 1 to 366 \(days to simulate\), "until-periodic" .* or "year"/);
   });
 
   it('a terrain lists every terrain of the wind table and the exponent range', () => {

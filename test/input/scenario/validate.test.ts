@@ -80,11 +80,11 @@ describe('the weather file is read only when it is text of a reasonable size', (
     const big = join(dir, 'big.csv');
     writeFileSync(big, '');
     truncateSync(big, 17 * 1024 * 1024); // a sparse file: its size, without writing 17 MB
-    expect(problemsOf(withWeatherFile('big.csv'), { baseDir: dir })).toEqual(['weather.file: found "big.csv"; expected a readable CSV file (it is 17.8 MB; a weather file may be at most 16.8 MB (a limit of stackday))']);
+    expect(problemsOf(withWeatherFile('big.csv'), { baseDir: dir })).toEqual(['weather.file: found "big.csv"; expected a readable weather file: an hourly CSV, an EPW or a TMY3 file (it is 17.8 MB; a weather file may be at most 16.8 MB (a limit of stackday))']);
   });
 
   it('a weather file of binary data is summarised', () => {
     writeFileSync(join(dir, 'binary.csv'), Buffer.from([0x74, 0x69, 0x6d, 0x65, 0, 0, 0xff, 0x01]));
-    expect(problemsOf(withWeatherFile('binary.csv'), { baseDir: dir })[0]).toMatch(/^weather\.file: found "binary\.csv"; expected a readable CSV file \(it is not text: 8 bytes, 4 of them not printable UTF-8/);
+    expect(problemsOf(withWeatherFile('binary.csv'), { baseDir: dir })[0]).toMatch(/^weather\.file: found "binary\.csv"; expected a readable weather file: an hourly CSV, an EPW or a TMY3 file \(it is not text: 8 bytes, 4 of them not printable UTF-8/);
   });
 });
