@@ -8,9 +8,10 @@
  */
 import { readFileSync } from 'node:fs';
 import { validateScenario, loadScenarioFile, type LoadedScenario } from './input/scenario/load.ts';
-import { simulate, type SimulateOptions } from './model/simulate.ts';
-import { summariseRun, type SummaryLocations } from './analysis/metrics/index.ts';
+import type { SimulateOptions } from './model/simulate.ts';
+import { summariseRun, simulateWithAccuracy, type SummaryLocations } from './analysis/metrics/index.ts';
 import { summaryJson, timeseriesCsv, segmentsCsv, writeArtefactsAtomically, type Artefact } from './output/write.ts';
+import { stateJson } from './output/state.ts';
 import type { ModelInputs } from './model/inputs.ts';
 import type { RunResult } from './model/timeseries.ts';
 import type { Summary } from './analysis/summary.ts';
@@ -27,6 +28,9 @@ export { resultSheet } from './output/console.ts';
 export { MATERIALS, findMaterial, materialNames } from './physics/materials/index.ts';
 export type { ModelInputs } from './model/inputs.ts';
 export type { RunResult, TimeSeries, EnergyAccount } from './model/timeseries.ts';
+export type { WallState } from './model/wallState.ts';
+export { readStateFile, parseStateJson, StateFileError } from './input/state.ts';
+export { stateJson } from './output/state.ts';
 export type { Summary, Verdict } from './analysis/summary.ts';
 export type { SummaryLocations, Location as FigureLocation } from './analysis/metrics/index.ts';
 
@@ -61,8 +65,9 @@ export function runScenario(scenario: string | Record<string, unknown> | LoadedS
     inputs = loaded.inputs;
     description = loaded.scenario.description ?? null;
   }
-  const result = simulate(inputs, options);
-  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description });
+  // the run and its accuracy check (run.accuracy: estimate by default, off, or a target)
+  const { result, accuracy } = simulateWithAccuracy(inputs, options);
+  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description, accuracy });
   return { inputs, result, summary, locations, description };
 }
 
@@ -82,6 +87,7 @@ export async function runArtefacts(run: Run, options: WriteOptions = {}): Promis
     { fileName: 'summary.json', content: summaryJson(run.summary) },
     { fileName: 'timeseries.csv', content: timeseriesCsv(run.result.series) },
     { fileName: 'segments.csv', content: segmentsCsv(run.result.series) },
+    { fileName: 'state.json', content: stateJson(run.result.finalState, run.inputs.name, VERSION) },
   ];
   if (options.charts !== false) {
     const { renderAllCharts } = await import('./output/charts/index.ts');

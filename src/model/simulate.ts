@@ -14,13 +14,31 @@ import { SECONDS_PER_DAY } from '../physics/constants.ts';
 import { Recorder } from './recorder.ts';
 import { energyAccount } from './energy.ts';
 import { SimulationError } from './errors.ts';
+import { sameNodes, stateOnMesh, wallStateOf, type WallState } from './wallState.ts';
+import { geometryWarnings } from './geometryChecks.ts';
 
 export { SimulationError } from './errors.ts';
 
 export interface SimulateOptions {
   /** Called now and then with the fraction of the run done (0–1). */
   readonly onProgress?: (fraction: number) => void;
+  /** The settings of this solve when they are not the scenario's (an accuracy check, a refined run). */
+  readonly refinement?: SolveRefinement;
+  /**
+   * Start from `state` (moved onto this solve's mesh) at the start of run day `day` and simulate
+   * `days` days, recording them as the whole run would (the accuracy check over the reported day).
+   */
+  readonly resume?: { readonly state: WallState; readonly day: number; readonly days: number };
 }
+
+/** A solve finer than the scenario's: every cell cut into `mesh`, both tolerances divided by `tolerance`. */
+export interface SolveRefinement {
+  readonly mesh: number;
+  readonly tolerance: number;
+}
+
+/** The scenario's own mesh and tolerances. */
+export const NO_REFINEMENT: SolveRefinement = { mesh: 1, tolerance: 1 };
 
 /** Build the mesh, the drivers and the ODE system for the inputs (see assemble.ts). */
 export const prepareModel = assembleModel;
@@ -81,21 +99,27 @@ function largestDailyChange(today: readonly Float64Array[], yesterday: readonly 
   return change;
 }
 
-/** Run the whole simulation. Throws SimulationError on solver failure. */
+/** Run the whole simulation (or, with `options.resume`, part of it). Throws SimulationError on solver failure. */
 export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): RunResult {
   const started = performance.now();
-  const model = assembleModel(inputs);
+  const refinement = options.refinement ?? NO_REFINEMENT;
+  const model = assembleModel(inputs, refinement.mesh);
   const { system, geometry, ctx, clock, mesh } = model;
   const run = inputs.run;
   const integrate = INTEGRATORS[run.integrator];
-  const tolerances = { rtol: run.rtol, atol: run.atol, maxStep: MAX_STEP_S };
+  const rtol = run.rtol / refinement.tolerance;
+  const atol = run.atol / refinement.tolerance;
+  const tolerances = { rtol, atol, maxStep: MAX_STEP_S };
 
   const t0 = run.mode === 'warmup' ? clock.runTimeOfLocal(0, run.firingStartClockS ?? 0) : 0;
-  const totalDays = run.length.kind === 'days' ? run.length.days : run.length.maxDays;
+  const resume = options.resume;
+  const firstDay = resume?.day ?? 0;
+  const totalDays = resume ? resume.days : run.length.kind === 'days' ? run.length.days : run.length.maxDays;
+  const notes: string[] = [];
 
   // ---- initial state ----
   const initialStarted = performance.now();
-  let y = initialState(model, t0);
+  let y = resume ? movedState(resume.state, model) : initialState(model, t0, notes);
   const initialStateMs = performance.now() - initialStarted;
 
   // ---- recording ----
@@ -112,6 +136,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   let auxDayStart = new Float64Array(AUX_SIZE);
   const yRunStart = y.slice();
   let yDayStart = y.slice();
+  let lastDayNumber = firstDay;
   const stats = emptyStats();
   let lastStep: number | undefined;
   let periodic: RunResult['periodic'] = null;
@@ -122,12 +147,13 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   // settled day, recorded (with the boundary diagnostics) once it is known
   const keepAllDays = run.length.kind === 'days';
 
-  if (keepAllDays) record(t0, y, 0);
-  for (let d = 0; d < totalDays; d++) {
+  if (keepAllDays) record(t0 + firstDay * SECONDS_PER_DAY, y, firstDay);
+  for (let d = firstDay; d < firstDay + totalDays; d++) {
     const { stops, outputs } = dayPlan(model, t0, d);
     const dayStart = t0 + d * SECONDS_PER_DAY;
     yDayStart = y.slice();
     auxDayStart = auxRun.slice();
+    lastDayNumber = d;
     const day = { t: [dayStart], states: [y.slice()] };
     let result;
     try {
@@ -137,7 +163,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
         dayStart,
         stops,
         { ...tolerances, initialStep: lastStep },
-        (t) => options.onProgress?.((d + (t - dayStart) / SECONDS_PER_DAY) / totalDays),
+        (t) => options.onProgress?.((d - firstDay + (t - dayStart) / SECONDS_PER_DAY) / totalDays),
         {
           instants: outputs,
           onOutput: (t, state) => {
@@ -159,16 +185,16 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     lastStep = result.lastStep;
     for (let i = 0; i < AUX_SIZE; i++) auxRun[i] += result.auxIntegral[i]!;
     addStats(stats, result.stats);
-    daysDone = d + 1;
+    daysDone = d - firstDay + 1;
     if (!keepAllDays) {
       const change = previousDay ? largestDailyChange(day.states, previousDay.states) : Number.POSITIVE_INFINITY;
       if (previousDay) changeByDay.push(change);
       previousDay = day;
-      if (run.length.kind === 'until-periodic' && change < run.length.toleranceK) break;
+      if (!resume && run.length.kind === 'until-periodic' && change < run.length.toleranceK) break;
     }
   }
-  if (!keepAllDays && previousDay) previousDay.t.forEach((t, k) => record(t, previousDay!.states[k]!, daysDone - 1));
-  if (run.length.kind === 'until-periodic') {
+  if (!keepAllDays && previousDay) previousDay.t.forEach((t, k) => record(t, previousDay!.states[k]!, lastDayNumber));
+  if (run.length.kind === 'until-periodic' && !resume) {
     const last = changeByDay.length ? changeByDay[changeByDay.length - 1]! : Number.POSITIVE_INFINITY;
     periodic = {
       reached: last < run.length.toleranceK,
@@ -183,6 +209,12 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   const energyDay = energyAccount(mesh, geometry, dayAux, yDayStart, y, SECONDS_PER_DAY);
 
   const series = rec.finish();
+  const dayStartT = t0 + lastDayNumber * SECONDS_PER_DAY;
+  const shown = (t: number) => clock.isoLocal(ctx.repeatFirstDay ? t - lastDayNumber * SECONDS_PER_DAY : t);
+  const stateAt = (state: Float64Array, t: number) => wallStateOf(mesh, inputs.layers, geometry.segments, state, shown(t));
+  const capped = mesh.cappedLayers.map(
+    (j) => `layer ${inputs.layers[j]!.label} needs more than its ${mesh.layerCells[j]} automatic cells (the most a layer gets) to resolve ${model.forcing.flueSide.setBy}; give it a cell count, or expect a larger error there`,
+  );
   return {
     series,
     energy: { run: energyRun, lastDay: energyDay },
@@ -190,19 +222,54 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     periodic,
     firingStartT: run.mode === 'warmup' ? t0 : null,
     integrator: { name: run.integrator, ...stats, computeMs: performance.now() - started, initialStateMs },
-    warnings: rec.ranges.warnings((p) => `${p.heightM.toFixed(1)} m, ${clock.isoLocal(p.t)}`),
-    assumptions: rec.ranges.assumptions(),
+    solve: {
+      meshRefinement: refinement.mesh,
+      rtol,
+      atol,
+      layerCells: mesh.layerCells,
+      cappedLayers: mesh.cappedLayers,
+      forcing: model.forcing,
+      firstDay,
+      resumed: resume !== undefined,
+    },
+    finalState: stateAt(y, dayStartT + SECONDS_PER_DAY),
+    reportedDayStart: { day: lastDayNumber, state: stateAt(yDayStart, dayStartT) },
+    warnings: [...geometryWarnings(inputs, geometry.outerDiameter), ...capped, ...rec.ranges.warnings((p) => `${p.heightM.toFixed(1)} m, ${clock.isoLocal(p.t)}`)],
+    assumptions: [...notes, ...rec.ranges.assumptions()],
   };
 }
 
-/** Initial wall state: uniform at air temperature (cold), or steady at the start or daily-mean conditions. */
-function initialState(model: AssembledModel, t0: number): Float64Array {
+/** A given state on this model's mesh (interpolated where the cells differ); SimulationError for a different wall. */
+function movedState(state: WallState, model: AssembledModel): Float64Array {
+  try {
+    return stateOnMesh(state, model.mesh, model.inputs.layers, model.geometry.segments);
+  } catch (e) {
+    if (e instanceof RangeError) throw new SimulationError(e.message);
+    throw e;
+  }
+}
+
+/**
+ * Initial wall state: uniform at air temperature (cold) or at a given temperature, a state from an
+ * earlier run (interpolated onto this mesh where its cells differ, with a note), or steady at the
+ * start or daily-mean conditions.
+ */
+function initialState(model: AssembledModel, t0: number, notes: string[]): Float64Array {
   const { system, inputs } = model;
+  const initial = inputs.run.initial;
   const d = system.driversAt(t0);
   const y = new Float64Array(system.size).fill(d.airTemperatureK);
-  if (inputs.run.initial === 'cold') return y;
+  if (initial === 'cold') return y;
+  if (typeof initial === 'object') {
+    if (initial.kind === 'uniform') return y.fill(initial.temperatureK);
+    if (!sameNodes(initial.state, model.mesh))
+      notes.push(
+        `The initial wall is the state of ${initial.state.timeLocal} from ${initial.fileName}, moved from its ${initial.state.nodeRadius.length} nodes to this run's ${model.mesh.nodeCount} by interpolation in ln r within each layer (the same wall; the cells differ).`,
+      );
+    return movedState(initial.state, model);
+  }
   y.fill(0.5 * (d.airTemperatureK + d.inletTemperatureK));
-  const instants = inputs.run.initial === 'steady-at-start' ? [t0] : Array.from({ length: 24 }, (_, k) => t0 + (k + 0.5) * 3600);
+  const instants = initial === 'steady-at-start' ? [t0] : Array.from({ length: 24 }, (_, k) => t0 + (k + 0.5) * 3600);
   try {
     return steadyState(averagedOverInstants(system, instants), y);
   } catch (e) {

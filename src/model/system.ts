@@ -7,12 +7,13 @@
  * (physics/flue/inside.ts: the gas marching up, heat into the inner surface) and the outer boundary
  * of each segment (physics/outside/boundary.ts: convection, radiation, sun). Quadrature channels
  * (W, whole stack): heat from the gas into the wall, outside convection, outside radiation, absorbed
- * sun.
+ * sun, and the gross exchange Σ |q| over every segment and boundary flow (in plus out, whatever the
+ * direction), the scale of the energy residual.
  */
 import type { OdeSystem } from '../solver/types.ts';
 import type { ModelInputs } from './inputs.ts';
 import { REPORTED_BOUNDARY_CHANNELS } from './timeseries.ts';
-import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../physics/wall/mesh.ts';
+import { LINK_CONDUCTION, LINK_CONTACT, type WallMesh } from '../physics/wall/mesh.ts';
 import { gapConductancePerMetre } from '../physics/wall/gap.ts';
 import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
 import { airPropertiesAt } from '../physics/properties/air.ts';
@@ -21,12 +22,14 @@ import { flueSideOfSegment, emptyFlueSide, type FlueSideSpec } from '../physics/
 import { outerBoundaryOfSegment, emptyOuterBoundary, type OuterSurfaceSpec, type OuterBoundaryOfSegment } from '../physics/outside/boundary.ts';
 import { gapConvectionRatio, insideMixed, insideNaturalNusselt, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
 import { sitePressurePa } from './site.ts';
+import { PackedTables } from './packedTables.ts';
 
 export const AUX_GAS_TO_WALL = 0;
 export const AUX_CONVECTION = 1;
 export const AUX_RADIATION = 2;
 export const AUX_SUN = 3;
-export const AUX_SIZE = 4;
+export const AUX_GROSS = 4;
+export const AUX_SIZE = 5;
 
 /** The per-segment quantities of one instant that reports and range checks need (W per metre of height, K, W/(m² K), m/s). */
 export const SEGMENT_CHANNELS = [
@@ -82,6 +85,11 @@ export class StackWallSystem implements OdeSystem {
   private readonly drivers: Drivers = emptyDrivers();
   private readonly conductance: Float64Array;
   private readonly capacity: Float64Array;
+  /** The mesh's k and c_p tables, packed; per link its k table (−1: not a conduction link), per node its c_p tables (−1: none). */
+  private readonly tables = new PackedTables();
+  private readonly linkTable: Int32Array;
+  private readonly capTableA: Int32Array;
+  private readonly capTableB: Int32Array;
   private readonly innerSink: Float64Array; // −∂q'_in/∂T_0 per segment (≥ 0)
   private readonly outerSink: Float64Array; // ∂q'_out/∂T_N per segment (≥ 0, heat leaving)
   private readonly convectionSink: Float64Array; // its convection part
@@ -114,6 +122,9 @@ export class StackWallSystem implements OdeSystem {
     this.size = this.n * geometry.segments;
     this.conductance = new Float64Array(Math.max(1, this.n - 1));
     this.capacity = new Float64Array(this.n);
+    this.linkTable = Int32Array.from(mesh.linkMaterial, (m) => (m ? this.tables.add(m.conductivity) : -1));
+    this.capTableA = Int32Array.from(mesh.capMaterialA, (m) => (m ? this.tables.add(m.specificHeat) : -1));
+    this.capTableB = Int32Array.from(mesh.capMaterialB, (m) => (m ? this.tables.add(m.specificHeat) : -1));
     this.innerSink = new Float64Array(geometry.segments);
     this.outerSink = new Float64Array(geometry.segments);
     this.convectionSink = new Float64Array(geometry.segments);
@@ -153,19 +164,32 @@ export class StackWallSystem implements OdeSystem {
     };
   }
 
-  /** Conductances per metre of height of the links of the segment whose nodes start at offset o. */
-  private fillConductances(y: Float64Array, o: number): void {
-    const mesh = this.mesh;
-    for (let i = 0; i < this.n - 1; i++) {
+  /**
+   * Conductances per metre of height of the links, and heat capacities per metre of height of the
+   * nodes, of the segment whose nodes start at offset o (the mesh's arrays read once into locals:
+   * this runs for every node of every segment at every evaluation).
+   */
+  private fillConductancesAndCapacities(y: Float64Array, o: number): void {
+    const { linkKind, linkGeometry, linkGap, capMassA, capMassB } = this.mesh;
+    const { conductance, capacity, tables, linkTable, capTableA, capTableB } = this;
+    const n = this.n;
+    const conductionLink = LINK_CONDUCTION;
+    const contactLink = LINK_CONTACT;
+    for (let i = 0; i < n - 1; i++) {
       const ta = y[o + i]!;
       const tb = y[o + i + 1]!;
-      const kind = mesh.linkKind[i];
-      this.conductance[i] =
-        kind === LINK_CONDUCTION
-          ? mesh.linkGeometry[i]! * mesh.linkConductivity[i]!(0.5 * (ta + tb))
-          : kind === LINK_CONTACT
-            ? mesh.linkGeometry[i]!
-            : gapConductancePerMetre(mesh.linkGap[i]!, ta, tb, gapConvectionRatio, this.sitePressurePa, this.geometry.segmentLength);
+      const kind = linkKind[i];
+      conductance[i] =
+        kind === conductionLink
+          ? linkGeometry[i]! * tables.at(linkTable[i]!, 0.5 * (ta + tb))
+          : kind === contactLink
+            ? linkGeometry[i]!
+            : gapConductancePerMetre(linkGap[i]!, ta, tb, gapConvectionRatio, this.sitePressurePa, this.geometry.segmentLength);
+    }
+    for (let i = 0; i < n; i++) {
+      const t = y[o + i]!;
+      const second = capTableB[i]!;
+      capacity[i] = capMassA[i]! * tables.at(capTableA[i]!, t) + (second >= 0 ? capMassB[i]! * tables.at(second, t) : 0);
     }
   }
 
@@ -176,40 +200,41 @@ export class StackWallSystem implements OdeSystem {
 
   /** dT/dt and the quadrature rates (whole-stack heat flows) at (t, y). */
   rhs(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array): void {
-    const { mesh, geometry } = this;
+    const { geometry } = this;
     const n = this.n;
     this.boundaries(t, y, null);
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;
-      this.fillConductances(y, o);
-      for (let i = 0; i < n; i++) {
-        this.capacity[i] = nodeCapacity(mesh, i, y[o + i]!);
-        dydt[o + i] = 0;
-      }
+      this.fillConductancesAndCapacities(y, o);
+      const conductance = this.conductance;
+      const capacity = this.capacity;
+      // net conduction into each node: from the link below minus into the link above
+      let fromBelow = this.flueToWall[s]!;
       for (let i = 0; i < n - 1; i++) {
-        const q = this.conductance[i]! * (y[o + i]! - y[o + i + 1]!);
-        dydt[o + i] -= q;
-        dydt[o + i + 1] += q;
+        const q = conductance[i]! * (y[o + i]! - y[o + i + 1]!);
+        dydt[o + i] = (fromBelow - q) / capacity[i]!;
+        fromBelow = q;
       }
-      dydt[o] += this.flueToWall[s]!;
-      dydt[o + n - 1] += this.sunIn[s]! - this.convectionOut[s]! - this.radiationOut[s]!;
-      for (let i = 0; i < n; i++) dydt[o + i] /= this.capacity[i]!;
+      dydt[o + n - 1] = (fromBelow + this.sunIn[s]! - this.convectionOut[s]! - this.radiationOut[s]!) / capacity[n - 1]!;
     }
     const dz = geometry.segmentLength;
     let qGas = 0;
     let qConv = 0;
     let qRad = 0;
     let qSun = 0;
+    let qGross = 0;
     for (let s = 0; s < geometry.segments; s++) {
       qGas += this.flueToWall[s]! * dz;
       qConv += this.convectionOut[s]! * dz;
       qRad += this.radiationOut[s]! * dz;
       qSun += this.sunIn[s]! * dz;
+      qGross += (Math.abs(this.flueToWall[s]!) + Math.abs(this.convectionOut[s]!) + Math.abs(this.radiationOut[s]!) + Math.abs(this.sunIn[s]!)) * dz;
     }
     aux[AUX_GAS_TO_WALL] = qGas;
     aux[AUX_CONVECTION] = qConv;
     aux[AUX_RADIATION] = qRad;
     aux[AUX_SUN] = qSun;
+    aux[AUX_GROSS] = qGross;
   }
 
   /**
@@ -279,8 +304,9 @@ export class StackWallSystem implements OdeSystem {
    * First-order change of the whole-stack heat flows (aux channels, W) for a change `delta` of the
    * state about the one of the last `rhs` call: the gas gives less to a warmer inner surface
    * (−innerSink δT₀), convection and radiation take more from a warmer outer surface; the sun does
-   * not depend on the wall. (The effect of a segment's wall on the gas reaching the segments above
-   * is left out, as in the Jacobian.)
+   * not depend on the wall; the gross exchange changes by each flow's change with the flow's sign.
+   * (The effect of a segment's wall on the gas reaching the segments above is left out, as in the
+   * Jacobian.)
    */
   auxChange(delta: Float64Array, aux: Float64Array): void {
     const n = this.n;
@@ -288,16 +314,21 @@ export class StackWallSystem implements OdeSystem {
     let gas = 0;
     let conv = 0;
     let rad = 0;
+    let gross = 0;
     for (let s = 0; s < this.geometry.segments; s++) {
-      const dInner = delta[s * n]!;
+      const dGas = -this.innerSink[s]! * delta[s * n]!;
       const dOuter = delta[s * n + n - 1]!;
-      gas -= this.innerSink[s]! * dInner;
-      conv += this.convectionSink[s]! * dOuter;
-      rad += this.radiationSink[s]! * dOuter;
+      const dConv = this.convectionSink[s]! * dOuter;
+      const dRad = this.radiationSink[s]! * dOuter;
+      gas += dGas;
+      conv += dConv;
+      rad += dRad;
+      gross += Math.sign(this.flueToWall[s]!) * dGas + Math.sign(this.convectionOut[s]!) * dConv + Math.sign(this.radiationOut[s]!) * dRad;
     }
     aux[AUX_GAS_TO_WALL] += gas * dz;
     aux[AUX_CONVECTION] += conv * dz;
     aux[AUX_RADIATION] += rad * dz;
+    aux[AUX_GROSS] += gross * dz;
   }
 
   /**
@@ -309,12 +340,12 @@ export class StackWallSystem implements OdeSystem {
     // the surface sinks at this state (already there when the last rhs call was at this state)
     const n = this.n;
     if (!(this.sinksT === t && this.sinksFingerprint === fingerprint(y))) this.boundaries(t, y, null);
-    const { mesh, geometry } = this;
+    const { geometry } = this;
     for (let s = 0; s < geometry.segments; s++) {
       const o = s * n;
-      this.fillConductances(y, o);
+      this.fillConductancesAndCapacities(y, o);
       for (let i = 0; i < n; i++) {
-        const c = nodeCapacity(mesh, i, y[o + i]!);
+        const c = this.capacity[i]!;
         const gl = i > 0 ? this.conductance[i - 1]! : 0;
         const gu = i < n - 1 ? this.conductance[i]! : 0;
         let dd = -(gl + gu);

@@ -17,10 +17,13 @@ import { dewPointFigures, lowestMargins } from './dewPoints.ts';
 import { evaluatedEnergy, heatPerDay, residualWarning } from './energy.ts';
 import { warmupTimes } from './warmup.ts';
 import { verdicts } from './verdicts.ts';
+import { meshSummary } from './mesh.ts';
+import { accuracyStatement, accuracyWarning, type AccuracyOutcome } from './accuracy.ts';
 
 export { evaluationInstants, type Location } from './evaluated.ts';
 export { fractionBelowZero } from './dewPoints.ts';
 export { timeToReach, timeToStayAbove } from './warmup.ts';
+export { simulateWithAccuracy, type AccuracyOutcome, type CheckedRun } from './accuracy.ts';
 export type { PositionSwingAt } from './extremes.ts';
 
 export interface SummaryContext {
@@ -28,6 +31,8 @@ export interface SummaryContext {
   readonly result: RunResult;
   readonly version: string;
   readonly description?: string | null;
+  /** The accuracy check of the run (from `simulateWithAccuracy`); without it the summary states no estimate. */
+  readonly accuracy?: AccuracyOutcome;
 }
 
 /**
@@ -94,7 +99,7 @@ function locations(
 }
 
 /** The summary of a run (summary.json) and where each of its located figures occurs. */
-export function summariseRun({ inputs, result, version, description }: SummaryContext): SummarisedRun {
+export function summariseRun({ inputs, result, version, description, accuracy }: SummaryContext): SummarisedRun {
   const mode = inputs.run.mode;
   const ev = evaluated(result.series, mode);
   const extremes = wallExtremes(ev);
@@ -111,6 +116,9 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
     warnings.push(`the periodic state was NOT reached in ${result.daysSimulated} days (last day-to-day change ${round(result.periodic.lastChangeK, 3)} K > tolerance ${result.periodic.toleranceK} K); figures are for the last simulated day`);
   const residual = residualWarning(energy);
   if (residual !== null) warnings.push(residual);
+  const statement = accuracyStatement(inputs, accuracy);
+  const accuracyNote = accuracyWarning(statement);
+  if (accuracyNote !== null) warnings.push(accuracyNote);
 
   const summary: Summary = {
     tool: { name: 'stackday', version },
@@ -130,7 +138,11 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
       output_interval_min: round(inputs.run.outputInterval / 60, 2),
       segments: ev.S,
       nodes_per_segment: ev.N,
+      relative_tolerance: result.solve.rtol,
+      absolute_tolerance_k: result.solve.atol,
+      mesh: meshSummary(result),
     },
+    accuracy: statement,
     verdicts: verdictList,
     all_limits_pass: verdictList.every((v) => v.status !== 'fail'),
     ...wallExtremeFigures(ev, extremes),
@@ -140,6 +152,7 @@ export function summariseRun({ inputs, result, version, description }: SummaryCo
     ...dewPointFigures(ev, margins),
     ...gasAndDraftRanges(ev),
     ...heatPerDay(energy),
+    energy_residual_run_percent: round(result.energy.run.residualPercent, 6),
     warmup,
     assumptions: runAssumptions(inputs, result),
     warnings,

@@ -9,7 +9,9 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { scenarioSchema, type Scenario, type ScenarioMaterial } from './schema.ts';
 import { ScenarioError, formatIssues, formatPath } from './errors.ts';
-import type { ModelInputs, LayerInput, WeatherInput, FiringPointInput, GasCompositionInput } from '../../model/inputs.ts';
+import type { ModelInputs, LayerInput, WeatherInput, FiringPointInput, GasCompositionInput, InitialWall } from '../../model/inputs.ts';
+import { wallStateMismatch } from '../../model/wallState.ts';
+import { readStateFile, StateFileError } from '../state.ts';
 import type { Material, PropertyTable } from '../../physics/materials/types.ts';
 import { findMaterial } from '../../physics/materials/index.ts';
 import { validateTable } from '../../physics/properties/table.ts';
@@ -135,6 +137,8 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       problems.push(`weather.design_day.max_air_temperature: found ${c(d.max_air_temperature)}; expected at least the minimum, ${c(d.min_air_temperature)}`);
     const dew = d.dew_point ?? d.min_air_temperature;
     if (dew > d.max_air_temperature + 0.01) problems.push(`weather.design_day.dew_point: found ${c(dew)}; expected at most the maximum air temperature, ${c(d.max_air_temperature)}`);
+    if (d.minimum_at !== undefined && d.shape !== 'sinusoid')
+      problems.push(`weather.design_day.minimum_at: found it with shape ${d.shape}; expected it only with shape: sinusoid (the published profile has its minimum at 05:00)`);
     if (clock && problems.length === 0) {
       const source = makeDesignDay(
         {
@@ -145,6 +149,8 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
           referenceHeightM: refHeight,
           cloudCover: d.cloud_cover,
           dewPointK: dew,
+          temperatureShape: d.shape,
+          minimumHour: (d.minimum_at ?? 5 * 3600) / 3600,
         },
         clock,
         { latitudeDeg: s.site.latitude, longitudeDeg: s.site.longitude },
@@ -211,6 +217,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   if (s.run.mode === 'warmup' && s.run.days === 'until-periodic')
     problems.push('run.days: found "until-periodic" with run.mode warmup; expected a whole number of days (a warm-up from a cold wall is not a periodic study)');
   if (s.run.output_interval > SECONDS_PER_DAY / 2) problems.push(`run.output_interval: found ${s.run.output_interval / 60} min; expected at most 12 h`);
+  const initial = initialWall(s, layers, baseDir, problems);
 
   if (problems.length > 0 || !weather || !composition) return null;
 
@@ -259,11 +266,12 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       mode: s.run.mode,
       length: s.run.days === 'until-periodic' ? { kind: 'until-periodic', toleranceK: s.run.periodic_tolerance, maxDays: s.run.max_days } : { kind: 'days', days: s.run.days },
       outputInterval: s.run.output_interval,
-      initial: s.run.mode === 'warmup' ? 'cold' : s.run.initial === 'steady' ? 'steady-daily-mean' : s.run.initial,
+      initial: initial!,
       integrator: s.run.integrator,
       rtol: s.run.relative_tolerance,
       atol: s.run.absolute_tolerance,
       firingStartClockS: s.run.firing_start,
+      accuracy: s.run.accuracy === 'estimate' || s.run.accuracy === 'off' ? { kind: s.run.accuracy } : { kind: 'target', targetK: s.run.accuracy },
     },
     limits: {
       shellTouchK: s.limits.shell_touch,
@@ -273,6 +281,34 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       waterDewMarginK: s.limits.water_dew_margin,
     },
   };
+}
+
+/**
+ * The initial wall: a warm-up starts cold unless a temperature or a state is given; a state file is
+ * read here and must belong to the same wall (layers, thicknesses, flue diameter, segments). Null
+ * (with the problems noted) when it cannot be used.
+ */
+function initialWall(s: Scenario, layers: readonly LayerInput[], baseDir: string, problems: string[]): InitialWall | null {
+  const given = s.run.initial;
+  if (given === 'steady' || given === 'steady-at-start' || given === 'cold') return s.run.mode === 'warmup' ? 'cold' : given === 'steady' ? 'steady-daily-mean' : given;
+  if ('temperature' in given) return { kind: 'uniform', temperatureK: given.temperature };
+  let state;
+  try {
+    state = readStateFile(resolve(baseDir, given.from), given.from);
+  } catch (e) {
+    if (e instanceof StateFileError) {
+      problems.push(`run.initial.from: ${e.message}`);
+      return null;
+    }
+    throw e;
+  }
+  if (layers.length !== s.stack.layers.length) return null; // a layer problem is already reported
+  const mismatch = wallStateMismatch(state, layers, s.stack.inner_diameter / 2, s.stack.segments);
+  if (mismatch !== null) {
+    problems.push(`run.initial.from: found a state of a different wall in "${given.from}" (${mismatch}); expected the state.json of a run of this wall (same layers, thicknesses, inner diameter and segments)`);
+    return null;
+  }
+  return { kind: 'state', state, fileName: given.from };
 }
 
 /**
