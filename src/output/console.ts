@@ -145,7 +145,8 @@ function accuracyLines(s: Summary): string[] {
   }
   const cells = m.layers.filter((l) => l.cells > 0).map((l) => `${l.label} ${l.cells} (${num(l.smallest_cell_mm, 1)}–${num(l.largest_cell_mm, 1)} mm)`);
   lines.push(`  mesh: ${cells.join(', ')} cells${m.refinement > 1 ? `, ${m.refinement}× the scenario's` : ''}; graded to ${m.flue_side_set_by} inside, ${m.outside_set_by} outside`);
-  lines.push(`  tolerances: relative ${s.run.relative_tolerance}, absolute ${s.run.absolute_tolerance_k} K`);
+  const tolerance = (v: number) => (v < 1e-3 ? v.toExponential() : String(v));
+  lines.push(`  tolerances: relative ${tolerance(s.run.relative_tolerance)}, absolute ${tolerance(s.run.absolute_tolerance_k)} K`);
   return lines;
 }
 
