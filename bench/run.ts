@@ -9,9 +9,10 @@
  * 3. Where the time goes: the same day with the outside correlations and sun switched off, and
  *    with the inside correlation switched off; the differences are their costs.
  * 4. Charts: the time to render every chart of the demo.
- * 5. The demo's default run with and without its accuracy check, against the same run on the
+ * 6. The demo's default run with and without its accuracy check, against the same run on the
  *    earlier defaults (equal cells of an eighth of the daily penetration depth, 2 to 24 per layer;
- *    rtol 1e-5, atol 0.01 K; no check), as the compute the defaults cost.
+ *    rtol 1e-5, atol 0.01 K; no check), as the compute the defaults cost (printed before 5).
+ * 5. Start-up of the compiled command (bench/startup.ts).
  */
 import { loadScenarioFile } from '../src/input/scenario/load.ts';
 import { simulate } from '../src/model/simulate.ts';
@@ -126,7 +127,7 @@ try {
 } catch (e) {
   console.log(`4. charts: not measured (${(e as Error).message})`);
 }
-// ---- 5. the demo's default run and its accuracy check ----
+// ---- 6. the demo's default run and its accuracy check (printed before start-up: it needs the sources, not dist/) ----
 {
   const demo = loadScenarioFile('scenarios/demo.yaml').inputs;
   // the earlier automatic cells: an eighth of the daily penetration depth √(α P/π) at 400 K, 2 to 24
@@ -149,9 +150,9 @@ try {
   const e = median(ms.earlier);
   const nodes = (r: RunResult) => r.series.nodes;
   const checked = simulateWithAccuracy(demo);
-  console.log('5. the demo (until periodic) — CPU time, median of 9 interleaved rounds');
+  console.log('6. the demo (until periodic) — CPU time, median of 9 interleaved rounds');
   console.log(`   earlier defaults (${nodes(simulate(earlier))} nodes, rtol 1e-5, atol 0.01 K, no check)   ${e.toFixed(0)} ms`);
-  console.log(`   default run without its check (${nodes(checked.result)} nodes, rtol ${demo.run.rtol}, atol ${demo.run.atol} K)   ${median(ms.plain).toFixed(0)} ms (${(median(ms.plain) / e).toFixed(2)}×)`);
+  console.log(`   default run without its check (${nodes(checked.result)} nodes, rtol ${demo.run.rtol.toExponential()}, atol ${demo.run.atol} K)   ${median(ms.plain).toFixed(0)} ms (${(median(ms.plain) / e).toFixed(2)}×)`);
   console.log(`   default run with its accuracy check (${nodes(checked.accuracy.check!)} nodes, one day)   ${median(ms.checked).toFixed(0)} ms (${(median(ms.checked) / e).toFixed(2)}×); largest estimate ± ${largestKelvinEstimate(checked.accuracy.estimates!).toFixed(3)} K`);
   console.log('');
 }
