@@ -22,7 +22,7 @@ export { scenarioSchema, scenarioJsonSchema, type Scenario } from './input/scena
 export { simulate, SimulationError } from './model/simulate.ts';
 export { CORRELATIONS, describeCorrelation } from './physics/correlations/registry.ts';
 export { CORRELATIONS_IN_USE } from './model/correlations.ts';
-export { summarise, summariseRun } from './analysis/metrics/index.ts';
+export { summarise, summariseRun, simulateWithAccuracy, type AccuracyOutcome, type CheckedRun } from './analysis/metrics/index.ts';
 export { thermalStressIndicator } from './physics/wall/stress.ts';
 export { resultSheet } from './output/console.ts';
 export { MATERIALS, findMaterial, materialNames } from './physics/materials/index.ts';
