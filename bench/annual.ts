@@ -48,7 +48,7 @@ export function benchAnnual(): void {
   }
   const s = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
   const line = (x: { wall: number[]; cpu: number[] }) => `${s(median(x.wall))} wall, ${s(median(x.cpu))} CPU (medians of ${ROUNDS}; wall ${x.wall.map(s).join(', ')})`;
-  console.log(`7. a year of the demo (scenarios/annual.yaml: ${inputs.stack.segments} segments, typical year, plant calendar, output every ${inputs.run.outputInterval / 60} min), compiled package`);
+  console.log(`8. a year of the demo (scenarios/annual.yaml: ${inputs.stack.segments} segments, typical year, plant calendar, output every ${inputs.run.outputInterval / 60} min), compiled package`);
   console.log(`   compute with the daily and annual statistics: ${line(withStats)}; target ≤ 10 s`);
   console.log(`   the same year without any sink:             ${line(bare)}`);
   console.log(`   ${steps} steps, ${rhs} rhs evaluations (${(steps / 365).toFixed(0)} steps a day); the statistics' share of the CPU time ≈ ${s(median(withStats.cpu) - median(bare.cpu))}`);

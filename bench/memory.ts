@@ -41,7 +41,7 @@ export function benchMemory(): void {
       { label: 'CSV files thinned to daily extremes', output: { timeseries: 'daily-extremes', segments: 'daily-extremes' } },
       { label: 'no per-instant files (compute alone)', output: { timeseries: 'off', segments: 'off' } },
     ];
-    console.log(`6. a 365-day run of the demo (${demo.stack.segments} segments, output every ${demo.run.output_interval}), compiled command in a child process, no charts`);
+    console.log(`7. a 365-day run of the demo (${demo.stack.segments} segments, output every ${demo.run.output_interval}), compiled command in a child process, no charts`);
     for (const v of variants) {
       const file = join(dir, 'year.yaml');
       writeFileSync(file, stringify({ ...demo, run: { ...demo.run, days: 365 }, output: v.output }));

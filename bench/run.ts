@@ -11,15 +11,20 @@
  * 3. Where the time goes: the same day with the outside correlations and sun switched off, and
  *    with the inside correlation switched off; the differences are their costs.
  * 4. Charts: the time to render every chart of the demo.
- * 5. Start-up of the compiled command (bench/startup.ts).
- * 6. Memory: peak memory and time of a 365-day run of the demo (bench/memory.ts).
- * 7. A year of the demo with its typical year and plant calendar: compute, peak memory (bench/annual.ts).
+ * 5. The demo's default run with and without its accuracy check, against the same run on the
+ *    earlier defaults (equal cells of an eighth of the daily penetration depth, 2 to 24 per layer;
+ *    rtol 1e-5, atol 0.01 K; no check), as the compute the defaults cost.
+ * 6. Start-up of the compiled command (bench/startup.ts).
+ * 7. Memory: peak memory and time of a 365-day run of the demo (bench/memory.ts).
+ * 8. A year of the demo with its typical year and plant calendar: compute, peak memory (bench/annual.ts).
  *
  * It runs the compiled package (dist/, built by `npm run bench` first), as users do: the
  * development loader adds overhead of its own to every module access.
  */
 import { loadScenarioFile } from '../dist/input/scenario/load.js';
 import { simulate } from '../dist/model/simulate.js';
+import { simulateWithAccuracy, largestKelvinEstimate } from '../dist/analysis/metrics/accuracy.js';
+import { thermalDiffusivity } from '../dist/physics/wall/mesh.js';
 import type { ModelInputs } from '../dist/model/inputs.js';
 import type { RunResult } from '../dist/model/timeseries.js';
 import { benchStartup } from './startup.ts';
@@ -143,6 +148,36 @@ try {
 } catch (e) {
   console.log(`4. charts: not measured (${(e as Error).message})`);
 }
+// ---- 5. the demo's default run and its accuracy check ----
+{
+  const demo = loadScenarioFile('scenarios/demo.yaml').inputs;
+  // the earlier automatic cells: an eighth of the daily penetration depth √(α P/π) at 400 K, 2 to 24
+  const earlierCells = (l: ModelInputs['layers'][number]) =>
+    l.material.kind === 'gap' ? l.cells : Math.min(24, Math.max(2, Math.ceil(l.thickness / (Math.sqrt((thermalDiffusivity(l.material, 400) * 86400) / Math.PI) / 8))));
+  const earlier: ModelInputs = { ...demo, layers: demo.layers.map((l) => ({ ...l, cells: earlierCells(l) })), run: { ...demo.run, rtol: 1e-5, atol: 0.01, accuracy: { kind: 'off' } } };
+  const plain: ModelInputs = { ...demo, run: { ...demo.run, accuracy: { kind: 'off' } } };
+  const variants = { earlier: () => simulate(earlier), plain: () => simulate(plain), checked: () => simulateWithAccuracy(demo) } as const;
+  const ms: Record<keyof typeof variants, number[]> = { earlier: [], plain: [], checked: [] };
+  for (const v of Object.values(variants)) for (let i = 0; i < 3; i++) v();
+  // interleaved rounds, process CPU time (the machine is shared: wall time counts the waits too)
+  for (let round = 0; round < 9; round++) {
+    for (const [name, v] of Object.entries(variants) as [keyof typeof variants, () => unknown][]) {
+      const c = process.cpuUsage();
+      v();
+      const d = process.cpuUsage(c);
+      ms[name].push((d.user + d.system) / 1000);
+    }
+  }
+  const e = median(ms.earlier);
+  const nodes = (r: RunResult) => r.series.nodes;
+  const checked = simulateWithAccuracy(demo);
+  console.log('5. the demo (until periodic) — CPU time, median of 9 interleaved rounds');
+  console.log(`   earlier defaults (${nodes(simulate(earlier))} nodes, rtol 1e-5, atol 0.01 K, no check)   ${e.toFixed(0)} ms`);
+  console.log(`   default run without its check (${nodes(checked.result)} nodes, rtol ${demo.run.rtol.toExponential()}, atol ${demo.run.atol} K)   ${median(ms.plain).toFixed(0)} ms (${(median(ms.plain) / e).toFixed(2)}×)`);
+  console.log(`   default run with its accuracy check (${nodes(checked.accuracy.check!)} nodes, one day)   ${median(ms.checked).toFixed(0)} ms (${(median(ms.checked) / e).toFixed(2)}×); largest estimate ± ${largestKelvinEstimate(checked.accuracy.estimates!).toFixed(3)} K`);
+  console.log('');
+}
+
 benchStartup();
 console.log('');
 benchMemory();

@@ -40,7 +40,7 @@ function wallMs(command: string, args: string[]): number {
 export function benchStartup(rounds = 5): StartupTimes | null {
   console.log('');
   if (!existsSync(join(ROOT, 'dist', 'cli', 'main.js'))) {
-    console.log('5. start-up: not measured (dist/ is missing: run `npm run build`)');
+    console.log('6. start-up: not measured (dist/ is missing: run `npm run build`)');
     return null;
   }
   const out = mkdtempSync(join(tmpdir(), 'stackday-bench-'));
@@ -59,7 +59,7 @@ export function benchStartup(rounds = 5): StartupTimes | null {
   }
   const result: StartupTimes = { nodeMs: middle(times.node), versionMs: middle(times.version), demoNoChartsMs: middle(times.demoNoCharts), npmStartMs: middle(times.npmStart), rounds };
   const row = (label: string, ms: number, note = '') => console.log(`   ${label.padEnd(34)} ${ms.toFixed(0).padStart(6)} ms  ${(ms / result.nodeMs).toFixed(1).padStart(5)}× node${note}`);
-  console.log(`5. start-up: end-to-end wall time of the compiled command (median of ${rounds} interleaved rounds after an untimed one)`);
+  console.log(`6. start-up: end-to-end wall time of the compiled command (median of ${rounds} interleaved rounds after an untimed one)`);
   console.log(`   ${"node -e ''".padEnd(34)} ${result.nodeMs.toFixed(0).padStart(6)} ms`);
   row('stackday --version', result.versionMs, '  (target ≤ 4×)');
   row('stackday run demo --no-charts', result.demoNoChartsMs);

@@ -10,15 +10,16 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { validateScenario, loadScenarioFile, type LoadedScenario } from './input/scenario/load.ts';
-import { simulate, type SimulateOptions } from './model/simulate.ts';
+import type { SimulateOptions } from './model/simulate.ts';
 import type { InstantSink } from './model/sinks.ts';
-import { DailyExtremes, summariseRun, type SummaryLocations } from './analysis/metrics/index.ts';
+import { DailyExtremes, summariseRun, simulateWithAccuracy, type SummaryLocations } from './analysis/metrics/index.ts';
 import { AnnualRecorder, annualSummary, type AnnualParts } from './analysis/annual/index.ts';
 import { summaryJson, writeArtefacts, writeArtefactsAtomically, type Artefact } from './output/write.ts';
 import { DEFAULT_SERIES_FILE, seriesFileArtefacts, segmentsCsv, sizeNotice, timeseriesCsv } from './output/csv.ts';
 import { StagedFolder, pauseForTest } from './output/folder.ts';
 import { cyclesCsv, monthlyCsv } from './output/annualCsv.ts';
 import { BufferedFileWriter } from './output/textOut.ts';
+import { stateJson } from './output/state.ts';
 import type { ModelInputs } from './model/inputs.ts';
 import type { RunResult } from './model/timeseries.ts';
 import type { Summary } from './analysis/summary.ts';
@@ -29,7 +30,7 @@ export { scenarioSchema, scenarioJsonSchema, type Scenario } from './input/scena
 export { simulate, SimulationError } from './model/simulate.ts';
 export { CORRELATIONS, describeCorrelation } from './physics/correlations/registry.ts';
 export { CORRELATIONS_IN_USE } from './model/correlations.ts';
-export { summarise, summariseRun } from './analysis/metrics/index.ts';
+export { summarise, summariseRun, simulateWithAccuracy, type AccuracyOutcome, type CheckedRun } from './analysis/metrics/index.ts';
 export { thermalStressIndicator } from './physics/wall/stress.ts';
 export { resultSheet } from './output/console.ts';
 export { MATERIALS, findMaterial, materialNames } from './physics/materials/index.ts';
@@ -39,6 +40,9 @@ export type { ModelInputs } from './model/inputs.ts';
 export type { RunResult, TimeSeries, EnergyAccount } from './model/timeseries.ts';
 export type { Summary, Verdict, AnnualSummary, MonthFigures, WallCycles } from './analysis/summary.ts';
 export { AnnualRecorder, annualSummary } from './analysis/annual/index.ts';
+export type { WallState } from './model/wallState.ts';
+export { readStateFile, parseStateJson, StateFileError } from './input/state.ts';
+export { stateJson } from './output/state.ts';
 export type { SummaryLocations, Location as FigureLocation } from './analysis/metrics/index.ts';
 
 /** The tool's version, from package.json. */
@@ -84,12 +88,13 @@ export function runScenario(scenario: string | Record<string, unknown> | LoadedS
 function runResolved({ inputs, description, warnings }: Resolved, options: SimulateOptions): Run {
   const daily = new DailyExtremes();
   const annual = inputs.annual ? new AnnualRecorder({ annual: inputs.annual, cycleThresholdK: inputs.limits.cyclesAbove?.rangeK ?? null }) : undefined;
-  const simulated = simulate(inputs, { ...options, sinks: [daily, ...(annual ? [annual] : []), ...(options.sinks ?? [])] });
+  // the run and its accuracy check (run.accuracy: estimate by default, off, or a target); the sinks see the reported run only
+  const { result: simulated, accuracy } = simulateWithAccuracy(inputs, { ...options, sinks: [daily, ...(annual ? [annual] : []), ...(options.sinks ?? [])] });
   // what validation found odd (e.g. a gas velocity above usual practice) is reported with the run's warnings
   const result = warnings.length ? { ...simulated, warnings: [...warnings, ...simulated.warnings] } : simulated;
   const parts = annual ? annual.parts() : null;
   const annualFigures = parts ? annualSummary(parts, result.energy.byDay, inputs) : undefined;
-  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description, daily, annual: annualFigures });
+  const { summary, locations } = summariseRun({ inputs, result, version: VERSION, description, daily, annual: annualFigures, accuracy });
   return { inputs, result, summary, locations, description, annual: parts };
 }
 
@@ -104,12 +109,15 @@ export interface WriteOptions {
 }
 
 /**
- * The files made once a run is complete: summary.json, for an annual run monthly.csv and
- * cycles.csv, then (unless `charts` is false) the PNG charts and report.html. A new file of this
+ * The files made once a run is complete: summary.json, state.json (the wall at the end, to start a
+ * later run from), for an annual run monthly.csv and cycles.csv, then (unless `charts` is false) the PNG charts and report.html. A new file of this
  * kind is one more entry here.
  */
 export async function finalArtefacts(run: Run, options: WriteOptions = {}): Promise<Artefact[]> {
-  const artefacts: Artefact[] = [{ fileName: 'summary.json', content: summaryJson(run.summary) }];
+  const artefacts: Artefact[] = [
+    { fileName: 'summary.json', content: summaryJson(run.summary) },
+    { fileName: 'state.json', content: stateJson(run.result.finalState, run.inputs.name, VERSION) },
+  ];
   if (run.summary.annual && run.annual) {
     artefacts.push({ fileName: 'monthly.csv', content: monthlyCsv(run.summary.annual) });
     artefacts.push({ fileName: 'cycles.csv', content: cyclesCsv(run.summary.annual, run.annual) });

@@ -220,6 +220,68 @@ export interface AnnualSummary
   readonly verdicts: readonly Verdict[];
 }
 
+/** The cells of one layer of a run's mesh. */
+export interface LayerMesh {
+  readonly label: string;
+  /** Cells across the layer (0 for a gap). */
+  readonly cells: number;
+  /** Thinnest and thickest cell, mm (null for a gap). */
+  readonly smallest_cell_mm: number | null;
+  readonly largest_cell_mm: number | null;
+}
+
+/** The mesh of a run and the forcing its automatic cells resolve. */
+export interface MeshSummary {
+  readonly layers: readonly LayerMesh[];
+  /** Time scale of the fastest forcing on the flue side, min, and what set it. */
+  readonly flue_side_time_scale_min: number;
+  readonly flue_side_set_by: string;
+  /** Time scale of the fastest forcing outside, min, and what set it. */
+  readonly outside_time_scale_min: number;
+  readonly outside_set_by: string;
+  /** Labels of automatic layers whose cell count hit the cap (also a warning). */
+  readonly capped_layers: readonly string[];
+  /** The run's mesh is the scenario's cut this many times finer (a refinement toward an accuracy target). */
+  readonly refinement: number;
+}
+
+/**
+ * How far the reported figures may be off: the estimated discretisation error (mesh and time
+ * integration) of each, from a second solve on a finer mesh at tighter tolerances (± this value).
+ */
+export interface AccuracyStatement {
+  readonly mode: 'estimate' | 'target' | 'off';
+  /** The target asked for, K (null without one). */
+  readonly target_k: number | null;
+  /** Whether every estimate in K meets the target (null without one). */
+  readonly target_met: boolean | null;
+  /** How many times the run was refined toward the target (0: the scenario's mesh and tolerances). */
+  readonly refinements: number;
+  /** How the estimate was made, in words. */
+  readonly method: string;
+  /** The check solve (null when not estimated). */
+  readonly check: {
+    readonly mesh_refinement: number;
+    readonly relative_tolerance: number;
+    readonly absolute_tolerance_k: number;
+    readonly nodes_per_segment: number;
+    readonly days: number;
+  } | null;
+  /** Any surface or interface temperature at any reported instant (the time series, the charts), K. */
+  readonly temperatures_k: number | null;
+  readonly peak_shell_k: number | null;
+  readonly peak_lining_k: number | null;
+  readonly lowest_water_dew_margin_k: number | null;
+  readonly lowest_acid_dew_margin_k: number | null;
+  /** Warm-up times at the top, min (null: not a warm-up, or not reached in both solves). */
+  readonly warmup_minutes_to_water_dew: number | null;
+  readonly warmup_minutes_to_acid_dew: number | null;
+  readonly warmup_minutes_to_shell_90_percent: number | null;
+  readonly warmup_minutes_to_shell_touch: number | null;
+  /** The largest estimate in K. */
+  readonly largest_k: number | null;
+}
+
 export interface Summary {
   readonly tool: { readonly name: 'stackday'; readonly version: string };
   readonly scenario: { readonly name: string; readonly description: string | null; readonly site: string; readonly first_day: string; readonly time_zone: string };
@@ -244,7 +306,11 @@ export interface Summary {
     readonly output_interval_min: number;
     readonly segments: number;
     readonly nodes_per_segment: number;
+    readonly relative_tolerance: number;
+    readonly absolute_tolerance_k: number;
+    readonly mesh: MeshSummary;
   };
+  readonly accuracy: AccuracyStatement;
   readonly verdicts: readonly Verdict[];
   readonly all_limits_pass: boolean;
   readonly peak_shell_c: number;
@@ -280,7 +346,10 @@ export interface Summary {
   readonly sun_absorbed_kwh_per_day: number;
   readonly convection_kwh_per_day: number;
   readonly radiation_kwh_per_day: number;
+  /** Residual of the energy balance over the period the figures cover, relative to the gross energy exchanged, %. */
   readonly energy_residual_percent: number;
+  /** The same over the whole run, %. */
+  readonly energy_residual_run_percent: number;
   readonly warmup: {
     readonly firing_start_local: string;
     readonly top: WarmupAtHeight;

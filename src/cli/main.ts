@@ -44,6 +44,7 @@ interface RunOptions {
   json?: boolean;
   firingStart?: string;
   days?: string;
+  accuracy?: string;
 }
 
 function parseChartSize(text: string): { width: number; height: number } {
@@ -71,6 +72,8 @@ function overridesFrom(raw: unknown, opts: RunOptions, mode: 'cycle' | 'warmup' 
   const overrides: ScenarioOverride[] = [];
   if (opts.integrator) overrides.push({ path: ['run', 'integrator'], value: opts.integrator, option: '--integrator' });
   if (opts.days !== undefined) overrides.push({ path: ['run', 'days'], value: /^\s*\d+\s*$/.test(opts.days) ? Number(opts.days) : opts.days, option: '--days' });
+  if (opts.accuracy !== undefined)
+    overrides.push({ path: ['run', 'accuracy'], value: /^\s*[\d.]+(e-?\d+)?\s*$/i.test(opts.accuracy) ? Number(opts.accuracy) : opts.accuracy, option: '--accuracy' });
   if (mode === 'warmup') {
     overrides.push({ path: ['run', 'mode'], value: 'warmup', option: 'warmup' });
     if (opts.firingStart !== undefined) overrides.push({ path: ['run', 'firing_start'], value: opts.firingStart, option: '--firing-start' });
@@ -145,6 +148,7 @@ function addRunOptions(cmd: Command): Command {
     .option('-o, --out <dir>', 'output folder (default: out/<scenario name>/)')
     .addOption(new Option('--integrator <name>', 'time integrator: implicit (TR-BDF2, default) or rk45 (Dormand–Prince reference)').choices(['implicit', 'rk45']))
     .option('--days <n>', 'simulate this many days, or "year" for an annual run (overrides run.days)')
+    .option('--accuracy <mode>', 'accuracy statement: estimate (default), off, or a target in K the run is refined toward (overrides run.accuracy)')
     .option('--no-charts', 'skip the PNG charts and report.html')
     .option('--chart-size <WxH>', 'chart size in pixels', '1000x600')
     .option('--chart-heights <m,...>', 'heights in m for the temperature-through-the-day charts (default: top and bottom)')

@@ -6,6 +6,7 @@
 import type { ModelInputs } from './inputs.ts';
 import { makeSiteClock, type SiteClock } from './clock.ts';
 import { buildWallMesh, type WallMesh } from '../physics/wall/mesh.ts';
+import { forcingTimeScales, type ForcingTimeScales } from './forcing.ts';
 import { StackWallSystem, type StackGeometry } from './system.ts';
 import type { DriverContext } from './drivers.ts';
 import { TERRAIN_BOUNDARY_LAYERS, windAtHeight, windAtHeightFromStation } from '../physics/outside/wind.ts';
@@ -19,6 +20,8 @@ export interface AssembledModel {
   readonly inputs: ModelInputs;
   readonly clock: SiteClock;
   readonly mesh: WallMesh;
+  /** The forcing time scales the automatic mesh resolves. */
+  readonly forcing: ForcingTimeScales;
   readonly geometry: StackGeometry;
   readonly gas: GasPropertyLookup;
   readonly system: StackWallSystem;
@@ -53,10 +56,18 @@ function firingScheduleOf(inputs: ModelInputs): FiringSchedule {
   return makeFiringSchedule({ ...schedule, offMassFlow });
 }
 
-/** Build the mesh, the drivers and the ODE system for the inputs. */
-export function assembleModel(inputs: ModelInputs): AssembledModel {
+/**
+ * Build the mesh, the drivers and the ODE system for the inputs; `meshRefinement` cuts every cell
+ * of the scenario's mesh into that many (the nested finer mesh of an accuracy check).
+ */
+export function assembleModel(inputs: ModelInputs, meshRefinement = 1): AssembledModel {
   const clock = makeSiteClock(inputs.site.timeZone, inputs.site.startDate);
-  const mesh = buildWallMesh(inputs.layers, inputs.stack.innerDiameter / 2);
+  const forcing = forcingTimeScales(inputs);
+  const mesh = buildWallMesh(inputs.layers, inputs.stack.innerDiameter / 2, {
+    flueSideTimeScaleS: forcing.flueSide.timeScaleS,
+    outsideTimeScaleS: forcing.outside.timeScaleS,
+    refinement: meshRefinement,
+  });
   const segments = inputs.stack.segments;
   const dz = inputs.stack.height / segments;
   const weather = inputs.weather.source;
@@ -81,5 +92,5 @@ export function assembleModel(inputs: ModelInputs): AssembledModel {
     repeatFirstDay: inputs.run.length.kind === 'until-periodic',
   };
   const system = new StackWallSystem(inputs, mesh, geometry, ctx, gas);
-  return { inputs, clock, mesh, geometry, gas, system, ctx, sitePressurePa: system.sitePressurePa };
+  return { inputs, clock, mesh, forcing, geometry, gas, system, ctx, sitePressurePa: system.sitePressurePa };
 }

@@ -1,11 +1,13 @@
 /**
  * The energy account of a run or of one day: heat from the gas into the wall, stored in the wall,
  * lost outside by convection and radiation, and absorbed from the sun; the residual
- * in − stored − out says how well the integration conserves energy.
+ * in − stored − out says how well the integration conserves energy. It is stated against the gross
+ * energy exchanged across the wall's surfaces, ∫ Σ |q| dt over every segment and flow (in plus out),
+ * which stays meaningful for a periodic day whose net flows nearly cancel.
  */
 import { nodeEnthalpyChange, type WallMesh } from '../physics/wall/mesh.ts';
 import type { EnergyAccount } from './timeseries.ts';
-import { AUX_CONVECTION, AUX_GAS_TO_WALL, AUX_RADIATION, AUX_SUN, type StackGeometry } from './system.ts';
+import { AUX_CONVECTION, AUX_GAS_TO_WALL, AUX_GROSS, AUX_RADIATION, AUX_SUN, type StackGeometry } from './system.ts';
 
 /**
  * Account over a period from the integrated heat flows `aux` (J, channels AUX_*) and the wall states
@@ -24,7 +26,7 @@ export function energyAccount(mesh: WallMesh, geometry: StackGeometry, aux: Floa
   const conv = aux[AUX_CONVECTION]!;
   const rad = aux[AUX_RADIATION]!;
   const sun = aux[AUX_SUN]!;
+  const gross = aux[AUX_GROSS]!;
   const residual = gas + sun - stored - conv - rad;
-  const scale = Math.max(Math.abs(gas), Math.abs(sun), Math.abs(conv) + Math.abs(rad), Math.abs(stored), 1e-30);
-  return { gasToWallJ: gas, convectionJ: conv, radiationJ: rad, sunJ: sun, storedJ: stored, residualPercent: (100 * residual) / scale, periodS };
+  return { gasToWallJ: gas, convectionJ: conv, radiationJ: rad, sunJ: sun, storedJ: stored, grossJ: gross, residualJ: residual, residualPercent: (100 * residual) / Math.max(gross, 1e-30), periodS };
 }

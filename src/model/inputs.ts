@@ -10,6 +10,7 @@ import type { Terrain } from '../physics/outside/wind.ts';
 import type { ClearSkyModel } from '../physics/sun/irradiance.ts';
 import type { DaySchedules, FiringPoint } from './firing.ts';
 import type { PlantCalendarSpec } from './calendar.ts';
+import type { WallState } from './wallState.ts';
 
 export interface SiteInput {
   readonly name: string;
@@ -155,14 +156,34 @@ export interface RunInput {
   readonly length: { readonly kind: 'days'; readonly days: number } | { readonly kind: 'until-periodic'; readonly toleranceK: number; readonly maxDays: number };
   /** Output interval, s. */
   readonly outputInterval: number;
-  /** Initial wall state. */
-  readonly initial: 'steady-daily-mean' | 'steady-at-start' | 'cold';
+  /**
+   * Initial wall state: steady at the daily-mean or first instant's conditions, cold (at the air
+   * temperature), uniform at a given temperature, or a state written by an earlier run.
+   */
+  readonly initial: InitialWall;
   readonly integrator: 'implicit' | 'rk45';
   readonly rtol: number;
   readonly atol: number;
+  /**
+   * The accuracy statement (run by the library entry, not by `simulate`): `estimate` (a second
+   * solve on a refined mesh at a tighter tolerance), `off`, or a target in K that the run refines
+   * toward. Undefined for inputs built in code: `estimate`.
+   */
+  readonly accuracy?: AccuracyRequest;
   /** Warm-up: local clock time at which firing starts on day 0, s. */
   readonly firingStartClockS?: number;
 }
+
+export type InitialWall =
+  | 'steady-daily-mean'
+  | 'steady-at-start'
+  | 'cold'
+  /** Every node at one temperature, K. */
+  | { readonly kind: 'uniform'; readonly temperatureK: number }
+  /** The state an earlier run ended with (state.json), and the file it came from. */
+  | { readonly kind: 'state'; readonly state: WallState; readonly fileName: string };
+
+export type AccuracyRequest = { readonly kind: 'estimate' } | { readonly kind: 'off' } | { readonly kind: 'target'; readonly targetK: number };
 
 export interface LimitsInput {
   /** Shell (outer surface) touch limit, K. */

@@ -23,6 +23,8 @@ import { energyAccount } from './energy.ts';
 import { SimulationError } from './errors.ts';
 import type { InstantSink, InstantView } from './sinks.ts';
 import { SERIES_INSTANT_CHANNELS, SERIES_SEGMENT_CHANNELS } from './timeseries.ts';
+import { sameNodes, stateOnMesh, wallStateOf, type WallState } from './wallState.ts';
+import { geometryWarnings } from './geometryChecks.ts';
 
 export { SimulationError } from './errors.ts';
 
@@ -35,6 +37,13 @@ export interface SimulateOptions {
   readonly retainAll?: boolean;
   /** Memory, bytes, a warm-up study's series may take (default WARMUP_SERIES_BUDGET_BYTES). */
   readonly warmupSeriesBudgetBytes?: number;
+  /** The settings of this solve when they are not the scenario's (an accuracy check, a refined run). */
+  readonly refinement?: SolveRefinement;
+  /**
+   * Start from `state` (moved onto this solve's mesh) at the start of run day `day` and simulate
+   * `days` days, recording them as the whole run would (the accuracy check over the reported day).
+   */
+  readonly resume?: { readonly state: WallState; readonly day: number; readonly days: number };
 }
 
 /**
@@ -48,6 +57,15 @@ export const WARMUP_SERIES_BUDGET_BYTES = 128 * 1024 * 1024;
 function bytesPerInstant(segments: number, nodes: number): number {
   return 8 * (segments * (nodes + SERIES_SEGMENT_CHANNELS.length) + SERIES_INSTANT_CHANNELS.length + 4) + 96;
 }
+
+/** A solve finer than the scenario's: every cell cut into `mesh`, both tolerances divided by `tolerance`. */
+export interface SolveRefinement {
+  readonly mesh: number;
+  readonly tolerance: number;
+}
+
+/** The scenario's own mesh and tolerances. */
+export const NO_REFINEMENT: SolveRefinement = { mesh: 1, tolerance: 1 };
 
 /** Build the mesh, the drivers and the ODE system for the inputs (see assemble.ts). */
 export const prepareModel = assembleModel;
@@ -108,21 +126,27 @@ function largestDailyChange(today: readonly Float64Array[], yesterday: readonly 
   return change;
 }
 
-/** Run the whole simulation. Throws SimulationError on solver failure. */
+/** Run the whole simulation (or, with `options.resume`, part of it). Throws SimulationError on solver failure. */
 export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): RunResult {
   const started = performance.now();
-  const model = assembleModel(inputs);
+  const refinement = options.refinement ?? NO_REFINEMENT;
+  const model = assembleModel(inputs, refinement.mesh);
   const { system, geometry, ctx, clock, mesh } = model;
   const run = inputs.run;
   const integrate = INTEGRATORS[run.integrator];
-  const tolerances = { rtol: run.rtol, atol: run.atol, maxStep: MAX_STEP_S };
+  const rtol = run.rtol / refinement.tolerance;
+  const atol = run.atol / refinement.tolerance;
+  const tolerances = { rtol, atol, maxStep: MAX_STEP_S };
 
   const t0 = run.mode === 'warmup' ? clock.runTimeOfLocal(0, run.firingStartClockS ?? 0) : 0;
-  const totalDays = run.length.kind === 'days' ? run.length.days : run.length.maxDays;
+  const resume = options.resume;
+  const firstDay = resume?.day ?? 0;
+  const totalDays = resume ? resume.days : run.length.kind === 'days' ? run.length.days : run.length.maxDays;
+  const notes: string[] = [];
 
   // ---- initial state ----
   const initialStarted = performance.now();
-  let y = initialState(model, t0);
+  let y = resume ? movedState(resume.state, model) : initialState(model, t0, notes);
   const initialStateMs = performance.now() - initialStarted;
 
   // ---- reporting: every instant to the sinks; the series keeps the days the figures need ----
@@ -130,7 +154,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   const sinks = options.sinks ?? [];
   for (const sink of sinks) sink.start?.(rec.layout);
   const diag = makeSegmentDiagnostics(geometry.segments, system.sectors);
-  const keepDay = retentionRule(run, totalDays, geometry.segments, mesh.nodeCount * system.sectors, options.retainAll === true, options.warmupSeriesBudgetBytes ?? WARMUP_SERIES_BUDGET_BYTES);
+  const keepDay = retentionRule(run, firstDay, totalDays, geometry.segments, mesh.nodeCount * system.sectors, options.retainAll === true, options.warmupSeriesBudgetBytes ?? WARMUP_SERIES_BUDGET_BYTES);
   let firstKeptDay = Number.POSITIVE_INFINITY;
   let lastKeptDay = -1;
   const record = (t: number, state: Float64Array, dayNumber: number, dayEnd: boolean) => {
@@ -150,8 +174,10 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   let auxDayStart = new Float64Array(AUX_SIZE);
   const yRunStart = y.slice();
   let yDayStart = y.slice();
+  let lastDayNumber = firstDay;
   const stats = emptyStats();
-  let lastStep: number | undefined;
+  // a run continuing from an earlier run's state starts with that run's last step (it then goes on as that run would have)
+  let lastStep: number | undefined = !resume && typeof run.initial === 'object' && run.initial.kind === 'state' ? run.initial.state.lastStepS : undefined;
   let periodic: RunResult['periodic'] = null;
   const changeByDay: number[] = [];
   const energyByDay: EnergyAccount[] = [];
@@ -161,13 +187,14 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
   // settled day, recorded (with the boundary diagnostics) once it is known
   const reportAsComputed = run.length.kind === 'days';
 
-  if (reportAsComputed) record(t0, y, 0, false);
-  for (let d = 0; d < totalDays; d++) {
+  if (reportAsComputed) record(t0 + firstDay * SECONDS_PER_DAY, y, firstDay, false);
+  for (let d = firstDay; d < firstDay + totalDays; d++) {
     const { stops, outputs } = dayPlan(model, t0, d);
     const dayStart = t0 + d * SECONDS_PER_DAY;
     const dayEnd = dayStart + SECONDS_PER_DAY;
     yDayStart = y.slice();
     auxDayStart = auxRun.slice();
+    lastDayNumber = d;
     const day = { t: [dayStart], states: [y.slice()] };
     let result;
     try {
@@ -177,7 +204,7 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
         dayStart,
         stops,
         { ...tolerances, initialStep: lastStep },
-        (t) => options.onProgress?.((d + (t - dayStart) / SECONDS_PER_DAY) / totalDays),
+        (t) => options.onProgress?.((d - firstDay + (t - dayStart) / SECONDS_PER_DAY) / totalDays),
         {
           instants: outputs,
           onOutput: (t, state) => {
@@ -200,20 +227,20 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     for (let i = 0; i < AUX_SIZE; i++) auxRun[i] += result.auxIntegral[i]!;
     energyByDay.push(energyAccount(mesh, geometry, result.auxIntegral, yDayStart, y, SECONDS_PER_DAY));
     addStats(stats, result.stats);
-    daysDone = d + 1;
+    daysDone = d - firstDay + 1;
     if (!reportAsComputed) {
       const change = previousDay ? largestDailyChange(day.states, previousDay.states) : Number.POSITIVE_INFINITY;
       if (previousDay) changeByDay.push(change);
       previousDay = day;
-      if (run.length.kind === 'until-periodic' && change < run.length.toleranceK) break;
+      if (!resume && run.length.kind === 'until-periodic' && change < run.length.toleranceK) break;
     }
   }
   if (!reportAsComputed && previousDay) {
     const settled = previousDay;
-    settled.t.forEach((t, k) => record(t, settled.states[k]!, daysDone - 1, k === settled.t.length - 1));
+    settled.t.forEach((t, k) => record(t, settled.states[k]!, lastDayNumber, k === settled.t.length - 1));
   }
   for (const sink of sinks) sink.finish?.();
-  if (run.length.kind === 'until-periodic') {
+  if (run.length.kind === 'until-periodic' && !resume) {
     const last = changeByDay.length ? changeByDay[changeByDay.length - 1]! : Number.POSITIVE_INFINITY;
     periodic = {
       reached: last < run.length.toleranceK,
@@ -229,6 +256,12 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
 
   const series = rec.finish();
   const keptDays = lastKeptDay >= firstKeptDay ? lastKeptDay - firstKeptDay + 1 : 0;
+  const dayStartT = t0 + lastDayNumber * SECONDS_PER_DAY;
+  const shown = (t: number) => clock.isoLocal(ctx.repeatFirstDay ? t - lastDayNumber * SECONDS_PER_DAY : t);
+  const stateAt = (state: Float64Array, t: number, step?: number) => wallStateOf(mesh, inputs.layers, geometry.segments, system.sectors, state, shown(t), step);
+  const capped = mesh.cappedLayers.map(
+    (j) => `layer ${inputs.layers[j]!.label} needs more than its ${mesh.layerCells[j]} automatic cells (the most a layer gets) to resolve ${model.forcing.flueSide.setBy}; give it a cell count, or expect a larger error there`,
+  );
   return {
     series,
     retained: { firstDay: Number.isFinite(firstKeptDay) ? firstKeptDay : 0, days: keptDays, truncated: run.mode === 'warmup' && keptDays < daysDone },
@@ -237,8 +270,20 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
     periodic,
     firingStartT: run.mode === 'warmup' ? t0 : null,
     integrator: { name: run.integrator, ...stats, computeMs: performance.now() - started, initialStateMs },
-    warnings: rec.ranges.warnings((p) => `${p.heightM.toFixed(1)} m, ${clock.isoLocal(p.t)}`),
-    assumptions: rec.ranges.assumptions(),
+    solve: {
+      meshRefinement: refinement.mesh,
+      rtol,
+      atol,
+      layerCells: mesh.layerCells,
+      cappedLayers: mesh.cappedLayers,
+      forcing: model.forcing,
+      firstDay,
+      resumed: resume !== undefined,
+    },
+    finalState: stateAt(y, dayStartT + SECONDS_PER_DAY, lastStep),
+    reportedDayStart: { day: lastDayNumber, state: stateAt(yDayStart, dayStartT) },
+    warnings: [...geometryWarnings(inputs, geometry.outerDiameter), ...capped, ...rec.ranges.warnings((p) => `${p.heightM.toFixed(1)} m, ${clock.isoLocal(p.t)}`)],
+    assumptions: [...notes, ...rec.ranges.assumptions()],
   };
 }
 
@@ -247,25 +292,48 @@ export function simulate(inputs: ModelInputs, options: SimulateOptions = {}): Ru
  * reports only its settled day); the last day of a fixed number of days of cycling, with the instant
  * that opens it; a warm-up study's first days, as many as its budget holds (at least one).
  */
-function retentionRule(run: ModelInputs['run'], totalDays: number, segments: number, nodes: number, retainAll: boolean, warmupBudgetBytes: number): (view: InstantView) => boolean {
+function retentionRule(run: ModelInputs['run'], firstDay: number, totalDays: number, segments: number, nodes: number, retainAll: boolean, warmupBudgetBytes: number): (view: InstantView) => boolean {
   if (retainAll || run.length.kind === 'until-periodic') return () => true;
   if (run.mode === 'warmup') {
     const instantsPerDay = Math.ceil(SECONDS_PER_DAY / run.outputInterval) + 8; // + schedule corners
     const budgetDays = Math.max(1, Math.floor(warmupBudgetBytes / (instantsPerDay * bytesPerInstant(segments, nodes))));
-    return (v) => v.runDay < budgetDays;
+    return (v) => v.runDay < firstDay + budgetDays;
   }
-  const lastDay = totalDays - 1;
+  const lastDay = firstDay + totalDays - 1;
   return (v) => v.runDay >= lastDay || (v.dayEnd && v.runDay === lastDay - 1);
 }
 
-/** Initial wall state: uniform at air temperature (cold), or steady at the start or daily-mean conditions. */
-function initialState(model: AssembledModel, t0: number): Float64Array {
+/** A given state on this model's mesh (interpolated where the cells differ); SimulationError for a different wall. */
+function movedState(state: WallState, model: AssembledModel): Float64Array {
+  try {
+    return stateOnMesh(state, model.mesh, model.inputs.layers, model.geometry.segments, model.system.sectors);
+  } catch (e) {
+    if (e instanceof RangeError) throw new SimulationError(e.message);
+    throw e;
+  }
+}
+
+/**
+ * Initial wall state: uniform at air temperature (cold) or at a given temperature, a state from an
+ * earlier run (interpolated onto this mesh where its cells differ, with a note), or steady at the
+ * start or daily-mean conditions.
+ */
+function initialState(model: AssembledModel, t0: number, notes: string[]): Float64Array {
   const { system, inputs } = model;
+  const initial = inputs.run.initial;
   const d = system.driversAt(t0);
   const y = new Float64Array(system.size).fill(d.airTemperatureK);
-  if (inputs.run.initial === 'cold') return y;
+  if (initial === 'cold') return y;
+  if (typeof initial === 'object') {
+    if (initial.kind === 'uniform') return y.fill(initial.temperatureK);
+    if (!sameNodes(initial.state, model.mesh))
+      notes.push(
+        `The initial wall is the state of ${initial.state.timeLocal} from ${initial.fileName}, moved from its ${initial.state.nodeRadius.length} nodes to this run's ${model.mesh.nodeCount} by interpolation in ln r within each layer (the same wall; the cells differ).`,
+      );
+    return movedState(initial.state, model);
+  }
   y.fill(0.5 * (d.airTemperatureK + d.inletTemperatureK));
-  const instants = inputs.run.initial === 'steady-at-start' ? [t0] : Array.from({ length: 24 }, (_, k) => t0 + (k + 0.5) * 3600);
+  const instants = initial === 'steady-at-start' ? [t0] : Array.from({ length: 24 }, (_, k) => t0 + (k + 0.5) * 3600);
   try {
     return steadyState(averagedOverInstants(system, instants), y);
   } catch (e) {

@@ -13,12 +13,13 @@
  * (physics/flue/inside.ts: the gas marching up, heat into the inner surface) and the outer boundary
  * of each segment (physics/outside/boundary.ts: convection, radiation, sun). Quadrature channels
  * (W, whole stack): heat from the gas into the wall, outside convection, outside radiation, absorbed
- * sun.
+ * sun, and the gross exchange Σ |q| over every column and boundary flow (in plus out, whatever the
+ * direction), the scale of the energy residual.
  */
 import type { OdeSystem } from '../solver/types.ts';
 import type { ModelInputs } from './inputs.ts';
 import { REPORTED_BOUNDARY_CHANNELS } from './timeseries.ts';
-import { LINK_CONDUCTION, LINK_CONTACT, nodeCapacity, type WallMesh } from '../physics/wall/mesh.ts';
+import { LINK_CONDUCTION, LINK_CONTACT, type WallMesh } from '../physics/wall/mesh.ts';
 import { gapConductancePerMetre } from '../physics/wall/gap.ts';
 import { evaluateDrivers, emptyDrivers, type DriverContext, type Drivers } from './drivers.ts';
 import { airPropertiesAt, airPropertiesInto } from '../physics/properties/air.ts';
@@ -30,6 +31,7 @@ import { flueSideOfSegment, flueSideOfSectors, emptyFlueSide, type FlueSideSpec,
 import { outerBoundaryOfSegment, emptyOuterBoundary, type OuterSurfaceSpec, type OuterBoundaryOfSegment } from '../physics/outside/boundary.ts';
 import { gapConvectionRatio, insideMixed, insideNaturalNusselt, insideTubeNusselt, outsideFilmCorrelations } from './correlations.ts';
 import { sitePressurePa } from './site.ts';
+import { PackedTables } from './packedTables.ts';
 import { makeGreyGasExchange, meanBeamLengthLongCylinder } from '../physics/correlations/gasRadiation.ts';
 import { STANDARD_PRESSURE, STEFAN_BOLTZMANN } from '../physics/constants.ts';
 
@@ -37,7 +39,8 @@ export const AUX_GAS_TO_WALL = 0;
 export const AUX_CONVECTION = 1;
 export const AUX_RADIATION = 2;
 export const AUX_SUN = 3;
-export const AUX_SIZE = 4;
+export const AUX_GROSS = 4;
+export const AUX_SIZE = 5;
 
 /** The per-segment quantities of one instant that reports and range checks need (W per metre of height, K, W/(m² K), m/s). */
 export const SEGMENT_CHANNELS = [
@@ -108,6 +111,11 @@ export class StackWallSystem implements OdeSystem {
   private readonly drivers: Drivers = emptyDrivers();
   private readonly conductance: Float64Array;
   private readonly capacity: Float64Array;
+  /** The mesh's k and c_p tables, packed; per link its k table (−1: not a conduction link), per node its c_p tables (−1: none). */
+  private readonly tables = new PackedTables();
+  private readonly linkTable: Int32Array;
+  private readonly capTableA: Int32Array;
+  private readonly capTableB: Int32Array;
   /** Per column (W per metre of height, W/(m K)): heat from the gas, its sink −∂q′/∂T₀; convection, radiation, sun at the outer surface, and the sinks ∂q′/∂T_N. */
   private readonly innerSink: Float64Array;
   private readonly outerSink: Float64Array;
@@ -146,6 +154,9 @@ export class StackWallSystem implements OdeSystem {
     this.size = this.n * this.columns;
     this.conductance = new Float64Array(Math.max(1, this.n - 1));
     this.capacity = new Float64Array(this.n);
+    this.linkTable = Int32Array.from(mesh.linkMaterial, (m) => (m ? this.tables.add(m.conductivity) : -1));
+    this.capTableA = Int32Array.from(mesh.capMaterialA, (m) => (m ? this.tables.add(m.specificHeat) : -1));
+    this.capTableB = Int32Array.from(mesh.capMaterialB, (m) => (m ? this.tables.add(m.specificHeat) : -1));
     const perColumn = () => new Float64Array(this.columns);
     this.innerSink = perColumn();
     this.outerSink = perColumn();
@@ -187,19 +198,30 @@ export class StackWallSystem implements OdeSystem {
     };
   }
 
-  /** Conductances per metre of height of the links of the column whose nodes start at offset o. */
-  private fillConductances(y: Float64Array, o: number): void {
-    const mesh = this.mesh;
-    for (let i = 0; i < this.n - 1; i++) {
+  /**
+   * Conductances per metre of height of the links, and heat capacities per metre of height of the
+   * nodes (into `capacity` from index `co`), of the column whose nodes start at offset o (the mesh's arrays read
+   * once into locals: this runs for every node of every column at every evaluation).
+   */
+  private fillConductancesAndCapacities(y: Float64Array, o: number, capacity: Float64Array, co: number): void {
+    const { linkKind, linkGeometry, linkGap, capMassA, capMassB } = this.mesh;
+    const { conductance, tables, linkTable, capTableA, capTableB } = this;
+    const n = this.n;
+    for (let i = 0; i < n - 1; i++) {
       const ta = y[o + i]!;
       const tb = y[o + i + 1]!;
-      const kind = mesh.linkKind[i];
-      this.conductance[i] =
+      const kind = linkKind[i];
+      conductance[i] =
         kind === LINK_CONDUCTION
-          ? mesh.linkGeometry[i]! * mesh.linkConductivity[i]!(0.5 * (ta + tb))
+          ? linkGeometry[i]! * tables.at(linkTable[i]!, 0.5 * (ta + tb))
           : kind === LINK_CONTACT
-            ? mesh.linkGeometry[i]!
-            : gapConductancePerMetre(mesh.linkGap[i]!, ta, tb, gapConvectionRatio, this.sitePressurePa, this.geometry.segmentLength);
+            ? linkGeometry[i]!
+            : gapConductancePerMetre(linkGap[i]!, ta, tb, gapConvectionRatio, this.sitePressurePa, this.geometry.segmentLength);
+    }
+    for (let i = 0; i < n; i++) {
+      const t = y[o + i]!;
+      const second = capTableB[i]!;
+      capacity[co + i] = capMassA[i]! * tables.at(capTableA[i]!, t) + (second >= 0 ? capMassB[i]! * tables.at(second, t) : 0);
     }
   }
 
@@ -210,26 +232,25 @@ export class StackWallSystem implements OdeSystem {
 
   /** dT/dt and the quadrature rates (whole-stack heat flows) at (t, y). */
   rhs(t: number, y: Float64Array, dydt: Float64Array, aux: Float64Array): void {
-    const { mesh } = this;
     const n = this.n;
     const several = this.sectors > 1;
     this.boundaries(t, y, null);
+    const conductance = this.conductance;
     for (let col = 0; col < this.columns; col++) {
       const o = col * n;
-      this.fillConductances(y, o);
-      const capacity = several ? this.capacityAll.subarray(o, o + n) : this.capacity;
-      for (let i = 0; i < n; i++) {
-        capacity[i] = nodeCapacity(mesh, i, y[o + i]!);
-        dydt[o + i] = 0;
-      }
+      const capacity = several ? this.capacityAll : this.capacity;
+      const co = several ? o : 0;
+      this.fillConductancesAndCapacities(y, o, capacity, co);
+      // net conduction into each node: from the link below minus into the link above (divided by
+      // the capacity here for one sector; with several, after the circumferential flows are added)
+      let fromBelow = this.flueToWall[col]!;
       for (let i = 0; i < n - 1; i++) {
-        const q = this.conductance[i]! * (y[o + i]! - y[o + i + 1]!);
-        dydt[o + i] -= q;
-        dydt[o + i + 1] += q;
+        const q = conductance[i]! * (y[o + i]! - y[o + i + 1]!);
+        dydt[o + i] = several ? fromBelow - q : (fromBelow - q) / capacity[i]!;
+        fromBelow = q;
       }
-      dydt[o] += this.flueToWall[col]!;
-      dydt[o + n - 1] += this.sunIn[col]! - this.convectionOut[col]! - this.radiationOut[col]!;
-      if (!several) for (let i = 0; i < n; i++) dydt[o + i] /= capacity[i]!;
+      const last = fromBelow + this.sunIn[col]! - this.convectionOut[col]! - this.radiationOut[col]!;
+      dydt[o + n - 1] = several ? last : last / capacity[n - 1]!;
     }
     if (several) {
       this.circumferentialFlows(y, dydt);
@@ -240,11 +261,13 @@ export class StackWallSystem implements OdeSystem {
     let qConv = 0;
     let qRad = 0;
     let qSun = 0;
+    let qGross = 0;
     for (let col = 0; col < this.columns; col++) {
       qGas += this.flueToWall[col]! * dz;
       qConv += this.convectionOut[col]! * dz;
       qRad += this.radiationOut[col]! * dz;
       qSun += this.sunIn[col]! * dz;
+      qGross += (Math.abs(this.flueToWall[col]!) + Math.abs(this.convectionOut[col]!) + Math.abs(this.radiationOut[col]!) + Math.abs(this.sunIn[col]!)) * dz;
     }
     // per-column flows are full-circumference equivalents (see the module comment)
     const share = 1 / this.sectors;
@@ -252,6 +275,7 @@ export class StackWallSystem implements OdeSystem {
     aux[AUX_CONVECTION] = several ? qConv * share : qConv;
     aux[AUX_RADIATION] = several ? qRad * share : qRad;
     aux[AUX_SUN] = several ? qSun * share : qSun;
+    aux[AUX_GROSS] = several ? qGross * share : qGross;
   }
 
   /** Heat round the circumference between neighbouring sectors, added to the node balances in `dydt` (W/m). */
@@ -382,8 +406,9 @@ export class StackWallSystem implements OdeSystem {
    * First-order change of the whole-stack heat flows (aux channels, W) for a change `delta` of the
    * state about the one of the last `rhs` call: the gas gives less to a warmer inner surface
    * (−innerSink δT₀), convection and radiation take more from a warmer outer surface; the sun does
-   * not depend on the wall. (The effect of a segment's wall on the gas reaching the segments above
-   * is left out, as in the Jacobian.)
+   * not depend on the wall; the gross exchange changes by each flow's change with the flow's sign.
+   * (The effect of a segment's wall on the gas reaching the segments above is left out, as in the
+   * Jacobian.)
    */
   auxChange(delta: Float64Array, aux: Float64Array): void {
     const n = this.n;
@@ -391,17 +416,22 @@ export class StackWallSystem implements OdeSystem {
     let gas = 0;
     let conv = 0;
     let rad = 0;
+    let gross = 0;
     for (let col = 0; col < this.columns; col++) {
-      const dInner = delta[col * n]!;
+      const dGas = -this.innerSink[col]! * delta[col * n]!;
       const dOuter = delta[col * n + n - 1]!;
-      gas -= this.innerSink[col]! * dInner;
-      conv += this.convectionSink[col]! * dOuter;
-      rad += this.radiationSink[col]! * dOuter;
+      const dConv = this.convectionSink[col]! * dOuter;
+      const dRad = this.radiationSink[col]! * dOuter;
+      gas += dGas;
+      conv += dConv;
+      rad += dRad;
+      gross += Math.sign(this.flueToWall[col]!) * dGas + Math.sign(this.convectionOut[col]!) * dConv + Math.sign(this.radiationOut[col]!) * dRad;
     }
     const share = this.sectors > 1 ? dz / this.sectors : dz;
     aux[AUX_GAS_TO_WALL] += gas * share;
     aux[AUX_CONVECTION] += conv * share;
     aux[AUX_RADIATION] += rad * share;
+    aux[AUX_GROSS] += gross * share;
   }
 
   /**
@@ -415,16 +445,16 @@ export class StackWallSystem implements OdeSystem {
     // the surface sinks at this state (already there when the last rhs call was at this state)
     const n = this.n;
     if (!(this.sinksT === t && this.sinksFingerprint === fingerprint(y))) this.boundaries(t, y, null);
-    const { mesh } = this;
     const links = this.circumferential;
+    const capacity = this.capacity;
     const ns = this.sectors;
     for (let col = 0; col < this.columns; col++) {
       const o = col * n;
-      this.fillConductances(y, o);
+      this.fillConductancesAndCapacities(y, o, capacity, 0);
       const left = links ? (col - (col % ns) + ((col % ns) + ns - 1) % ns) * n : 0;
       const right = links ? (col - (col % ns) + ((col % ns) + 1) % ns) * n : 0;
       for (let i = 0; i < n; i++) {
-        const c = nodeCapacity(mesh, i, y[o + i]!);
+        const c = capacity[i]!;
         const gl = i > 0 ? this.conductance[i - 1]! : 0;
         const gu = i < n - 1 ? this.conductance[i]! : 0;
         let dd = -(gl + gu);

@@ -1,3 +1,6 @@
+import type { WallState } from './wallState.ts';
+import type { ForcingTimeScales } from './forcing.ts';
+
 /**
  * The simulated time series: what the model hands to metrics and reports. SI units and kelvin.
  * Arrays are flat: temperature[(k · segments + s) · nodes + i] for output instant k, segment s,
@@ -89,7 +92,11 @@ export interface EnergyAccount {
   readonly sunJ: number;
   /** Change of heat stored in the wall, J. */
   readonly storedJ: number;
-  /** (in − stored − out) relative to the largest flow, %. */
+  /** Gross energy exchanged across the wall's surfaces, ∫ Σ |q| dt over every segment and flow (in plus out), J. */
+  readonly grossJ: number;
+  /** in − stored − out, J. */
+  readonly residualJ: number;
+  /** The residual relative to the gross energy exchanged, %. */
   readonly residualPercent: number;
   /** Length of the accounting period, s. */
   readonly periodS: number;
@@ -107,6 +114,25 @@ export interface RetainedDays {
   readonly days: number;
   /** True when a warm-up study held fewer days than it simulated (its memory budget ran out). */
   readonly truncated: boolean;
+}
+
+/** How a solve was set up: its mesh and tolerances, and where it started. */
+export interface SolveSettings {
+  /** Every cell of the scenario's mesh was cut into this many (1: the scenario's mesh). */
+  readonly meshRefinement: number;
+  /** Tolerances in use (the scenario's, or tightened for a check). */
+  readonly rtol: number;
+  readonly atol: number;
+  /** Cells of each layer, inside → outside (0 for a gap). */
+  readonly layerCells: readonly number[];
+  /** Automatic layers whose cell count was capped. */
+  readonly cappedLayers: readonly number[];
+  /** The fastest forcing on each face, which the automatic cells resolve. */
+  readonly forcing: ForcingTimeScales;
+  /** Run day the solve started on (0 unless it resumed from a state). */
+  readonly firstDay: number;
+  /** Whether the solve resumed from a given state partway through the run (an accuracy check over the reported day). */
+  readonly resumed: boolean;
 }
 
 export interface RunResult {
@@ -132,7 +158,13 @@ export interface RunResult {
     readonly computeMs: number;
     readonly initialStateMs: number;
   };
-  /** Warnings gathered during the run: correlations used beyond their range without a justification (by how much and where). */
+  /** The settings of this solve: mesh (cells per layer, the forcing the automatic cells resolve, any cap) and tolerances. */
+  readonly solve: SolveSettings;
+  /** The wall at the end of the run (state.json). */
+  readonly finalState: WallState;
+  /** The wall at the start of the reported day (the last simulated day), with that day's run-day index. */
+  readonly reportedDayStart: { readonly day: number; readonly state: WallState };
+  /** Warnings gathered during the run: geometry that weakens the model's assumptions, capped automatic cells, correlations used beyond their range without a justification (by how much and where). */
   readonly warnings: readonly string[];
   /** Correlations used beyond their published range where the literature accepts it, once each. */
   readonly assumptions: readonly string[];

@@ -4,7 +4,7 @@
  */
 import type { AnnualSummary, Summary, Verdict } from '../analysis/summary.ts';
 import type { Comparison } from '../analysis/compare.ts';
-import { decimals, isoMinute, MISSING } from './format.ts';
+import { decimals, isoMinute, MISSING, plusMinus } from './format.ts';
 
 const STATUS_WORD: Record<Verdict['status'], string> = { pass: 'PASS', fail: 'FAIL', 'not-set': MISSING };
 
@@ -41,12 +41,12 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
   lines.push(
     ...table(
       [
-        ['hottest shell', `${num(s.peak_shell_c)} °C`, hhmm(s.peak_shell_time), `at ${num(s.peak_shell_height_m)} m`],
-        ['hottest lining', `${num(s.peak_lining_c)} °C`, hhmm(s.peak_lining_time), `at ${num(s.peak_lining_height_m)} m`],
-        ['coldest inner surface', `${num(s.min_inner_surface_c)} °C`, hhmm(s.min_inner_surface_time), `at ${num(s.min_inner_surface_height_m)} m`],
-        ['largest through-wall ΔT', `${num(s.through_wall_max_delta_t_k)} K`, hhmm(s.through_wall_max_delta_t_time), `at ${num(s.through_wall_max_delta_t_height_m)} m`],
+        ['hottest shell', `${num(s.peak_shell_c)} °C`, plusMinus(s.accuracy.peak_shell_k, 'K'), hhmm(s.peak_shell_time), `at ${num(s.peak_shell_height_m)} m`],
+        ['hottest lining', `${num(s.peak_lining_c)} °C`, plusMinus(s.accuracy.peak_lining_k, 'K'), hhmm(s.peak_lining_time), `at ${num(s.peak_lining_height_m)} m`],
+        ['coldest inner surface', `${num(s.min_inner_surface_c)} °C`, '', hhmm(s.min_inner_surface_time), `at ${num(s.min_inner_surface_height_m)} m`],
+        ['largest through-wall ΔT', `${num(s.through_wall_max_delta_t_k)} K`, '', hhmm(s.through_wall_max_delta_t_time), `at ${num(s.through_wall_max_delta_t_height_m)} m`],
       ],
-      ['l', 'r', 'l', 'l'],
+      ['l', 'r', 'l', 'l', 'l'],
     ).map((l) => `  ${l}`),
   );
   lines.push('');
@@ -70,9 +70,13 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
   );
   lines.push('');
   lines.push('FLUE GAS AND DEW POINTS');
-  const acid = s.acid_dew_point_c === null ? 'none (no SO3)' : `${num(s.acid_dew_point_c)} °C, lowest margin ${num(s.lowest_acid_dew_margin_k)} K at ${num(s.lowest_acid_dew_margin_height_m)} m, ${hhmm(s.lowest_acid_dew_margin_time)}`;
+  const pm = (v: number | null) => (plusMinus(v, 'K') ? ` ${plusMinus(v, 'K')}` : '');
+  const acid =
+    s.acid_dew_point_c === null
+      ? 'none (no SO3)'
+      : `${num(s.acid_dew_point_c)} °C, lowest margin ${num(s.lowest_acid_dew_margin_k)} K${pm(s.accuracy.lowest_acid_dew_margin_k)} at ${num(s.lowest_acid_dew_margin_height_m)} m, ${hhmm(s.lowest_acid_dew_margin_time)}`;
   lines.push(`  acid dew point   ${acid}`);
-  lines.push(`  water dew point  ${num(s.water_dew_point_c)} °C, lowest margin ${num(s.lowest_water_dew_margin_k)} K at ${num(s.lowest_water_dew_margin_height_m)} m, ${hhmm(s.lowest_water_dew_margin_time)}`);
+  lines.push(`  water dew point  ${num(s.water_dew_point_c)} °C, lowest margin ${num(s.lowest_water_dew_margin_k)} K${pm(s.accuracy.lowest_water_dew_margin_k)} at ${num(s.lowest_water_dew_margin_height_m)} m, ${hhmm(s.lowest_water_dew_margin_time)}`);
   const top = (arr: readonly { height_m: number; hours: number }[]) => (arr.length ? `${num(arr[arr.length - 1]!.hours)} h at the top, ${num(arr[0]!.hours)} h at the bottom` : MISSING);
   lines.push(`  hours below acid dew point   ${top(s.hours_below_acid_dew)}`);
   lines.push(`  hours below water dew point  ${top(s.hours_below_water_dew)}`);
@@ -81,9 +85,13 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
     lines.push('');
     lines.push(`WARM-UP from firing at ${hhmm(s.warmup.firing_start_local)} (minutes; at the top of the stack)`);
     const w = s.warmup.top;
-    lines.push(`  inner surface above water dew point + margin: ${num(w.minutes_to_water_dew, 0)} min`);
-    lines.push(`  inner surface above acid dew point + margin:  ${num(w.minutes_to_acid_dew, 0)} min`);
-    lines.push(`  shell at 90 % of its rise: ${num(w.minutes_to_shell_90_percent, 0)} min; shell past the touch limit: ${w.minutes_to_shell_touch === null ? 'never' : `${num(w.minutes_to_shell_touch, 0)} min`}`);
+    const a = s.accuracy;
+    const pmMin = (v: number | null) => (plusMinus(v, 'min') ? ` ${plusMinus(v, 'min')}` : '');
+    lines.push(`  inner surface above water dew point + margin: ${num(w.minutes_to_water_dew, 0)} min${pmMin(a.warmup_minutes_to_water_dew)}`);
+    lines.push(`  inner surface above acid dew point + margin:  ${num(w.minutes_to_acid_dew, 0)} min${pmMin(a.warmup_minutes_to_acid_dew)}`);
+    lines.push(
+      `  shell at 90 % of its rise: ${num(w.minutes_to_shell_90_percent, 0)} min${pmMin(a.warmup_minutes_to_shell_90_percent)}; shell past the touch limit: ${w.minutes_to_shell_touch === null ? 'never' : `${num(w.minutes_to_shell_touch, 0)} min${pmMin(a.warmup_minutes_to_shell_touch)}`}`,
+    );
     lines.push(`  by height (minutes from firing; ${MISSING} = not within the run):`);
     lines.push(
       ...table(
@@ -106,7 +114,7 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
   lines.push('');
   lines.push('HEAT (per day)');
   lines.push(`  net loss to outside ${num(s.heat_loss_kwh_per_day)} kWh (convection ${num(s.convection_kwh_per_day)}, radiation ${num(s.radiation_kwh_per_day)}, sun absorbed ${num(s.sun_absorbed_kwh_per_day)}); from the gas ${num(s.gas_to_wall_kwh_per_day)} kWh`);
-  lines.push(`  energy residual ${num(s.energy_residual_percent, 4)} %`);
+  lines.push(`  energy residual ${num(s.energy_residual_percent, 4)} % of the energy exchanged over the figures' period, ${num(s.energy_residual_run_percent, 4)} % over the run`);
   if (s.daily.length > 1) {
     const hottest = s.daily.reduce((a, d) => (d.shell_max_c > a.shell_max_c ? d : a));
     const heat = s.daily.reduce((sum, d) => sum + (d.heat_loss_kwh ?? 0), 0);
@@ -115,6 +123,8 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
   if (s.annual) lines.push('', ...annualLines(s.annual));
   if (s.run.periodic_requested)
     lines.push(`  periodic state ${s.run.periodic_reached ? 'reached' : 'NOT reached'} after ${s.run.days_simulated} days (last change ${num(s.run.periodic_last_change_k, 3)} K, tolerance ${num(s.run.periodic_tolerance_k, 3)} K)`);
+  lines.push('');
+  lines.push(...accuracyLines(s));
   if (s.assumptions.length) {
     lines.push('');
     lines.push('ASSUMPTIONS OF THIS RUN');
@@ -169,6 +179,24 @@ function annualLines(a: AnnualSummary): string[] {
     ).map((l) => `    ${l}`),
   );
   lines.push('  (every month, height and range bin in summary.json annual, monthly.csv and cycles.csv)');
+  return lines;
+}
+
+/** The ACCURACY block: the estimate (or that there is none), the mesh and the tolerances. */
+function accuracyLines(s: Summary): string[] {
+  const a = s.accuracy;
+  const m = s.run.mesh;
+  const lines = ['ACCURACY'];
+  if (a.check === null) lines.push('  not estimated (run.accuracy: off)');
+  else {
+    lines.push(`  estimated error: temperatures through the day ${plusMinus(a.temperatures_k, 'K')}, peaks and lowest margins as shown beside them`);
+    lines.push(`  (${a.method})`);
+    if (a.target_k !== null) lines.push(`  target ${a.target_k} K ${a.target_met ? 'met' : 'NOT met'} after ${a.refinements} refinement(s)`);
+  }
+  const cells = m.layers.filter((l) => l.cells > 0).map((l) => `${l.label} ${l.cells} (${num(l.smallest_cell_mm, 1)}–${num(l.largest_cell_mm, 1)} mm)`);
+  lines.push(`  mesh: ${cells.join(', ')} cells${m.refinement > 1 ? `, ${m.refinement}× the scenario's` : ''}; graded to ${m.flue_side_set_by} inside, ${m.outside_set_by} outside`);
+  const tolerance = (v: number) => (v < 1e-3 ? v.toExponential() : String(v));
+  lines.push(`  tolerances: relative ${tolerance(s.run.relative_tolerance)}, absolute ${tolerance(s.run.absolute_tolerance_k)} K`);
   return lines;
 }
 

@@ -78,3 +78,12 @@ export function clockHours(isoLocal: string): number {
   if (!m) return 0;
   return Number(m[1]) + Number(m[2]) / 60 + Number(m[3] ?? 0) / 3600;
 }
+
+/**
+ * An estimated error as read beside a figure: "± 0.066 K" (two significant digits; "± < 0.001 K"
+ * below half a thousandth of the unit); '' for null, undefined or a non-finite value.
+ */
+export function plusMinus(v: number | null | undefined, unit: string): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '';
+  return v < 0.0005 ? `± < 0.001 ${unit}` : `± ${Number(v.toPrecision(2))} ${unit}`;
+}

@@ -8,7 +8,7 @@ import type { ModelInputs, FiringPointInput, LayerInput } from '../model/inputs.
 import type { PlantCalendarSpec, WeekPattern } from '../model/calendar.ts';
 import type { Summary, Verdict, WarmupAtHeight } from '../analysis/summary.ts';
 import { correlationsInUse } from './modelDescription.ts';
-import { celsius as toC, clockFromSeconds as clock, fixed as num, isoMinute as when, MISSING } from './format.ts';
+import { celsius as toC, clockFromSeconds as clock, fixed as num, isoMinute as when, MISSING, plusMinus } from './format.ts';
 
 export interface ReportChart {
   readonly fileName: string;
@@ -109,7 +109,7 @@ ${summary.scenario.description ? `<p class="description">${esc(summary.scenario.
 <dt>Outer surface</dt><dd>Emissivity ${num(inputs.surface.emissivity, 2)}, solar absorptance ${num(inputs.surface.solarAbsorptance, 2)}; outside film ${inputs.outside.filmCoefficient === undefined ? 'from correlations (Churchill–Bernstein forced, Churchill–Chu natural, combined)' : `fixed at ${num(inputs.outside.filmCoefficient)} W/(m² K)`}; radiation ${radText}; sun ${inputs.outside.sun ? 'applied' : 'not applied'}.</dd>
 <dt>Weather</dt><dd>${weatherText(inputs)}</dd>
 <dt>Flue gas</dt><dd>${compText} (mole fractions of the wet gas); properties of the ${inputs.flue.properties === 'mixture' ? 'gas mixture' : 'air'}; inside film ${inputs.flue.filmCoefficient === undefined ? 'from the correlations in use (below)' : `fixed at ${num(inputs.flue.filmCoefficient)} W/(m² K)`}; gas ${inputs.flue.gasCooling ? 'cools as it rises' : 'at inlet temperature at every height'}; pressure ${num(inputs.flue.pressurePa / 1000, 2)} kPa${inputs.flue.offMassFlow !== undefined ? `; natural-draft flow while off at least ${num(inputs.flue.offMassFlow, 3)} kg/s` : ''}.</dd>
-<dt>Run</dt><dd>${run.mode === 'warmup' ? `Warm-up from a ${esc(run.initial)} wall, firing from ${clock(run.firingStartClockS ?? 0)}` : `Daily cycle from the ${esc(run.initial)} state`}; ${length}; output every ${num(run.outputInterval / 60, 1)} min; ${esc(run.integrator)} integrator (rtol ${run.rtol}, atol ${run.atol} K).</dd>
+<dt>Run</dt><dd>${run.mode === 'warmup' ? `Warm-up from ${esc(initialWords(run.initial))}, firing from ${clock(run.firingStartClockS ?? 0)}` : `Daily cycle from ${esc(initialWords(run.initial))}`}; ${length}; output every ${num(run.outputInterval / 60, 1)} min; ${esc(run.integrator)} integrator (rtol ${run.rtol}, atol ${run.atol} K).</dd>
 <dt>Limits</dt><dd>${limitText}.</dd>
 </dl>
 <h3>Wall build-up, flue side outward</h3>
@@ -118,6 +118,12 @@ ${table(['#', 'Layer', 'Material', 'Kind', 'Thickness (mm)', 'k (W/(m K))', 'Den
 <p class="note">${sched.caption}</p>
 ${table([...(sched.dayHeader ? [sched.dayHeader] : []), 'Local time', 'Inlet gas (°C)', 'Mass flow (kg/s)'], sched.rows, 'narrow')}
 </section>`;
+}
+
+/** The initial wall in words. */
+function initialWords(initial: ModelInputs['run']['initial']): string {
+  if (typeof initial === 'string') return { 'steady-daily-mean': 'the steady state at the daily-mean conditions', 'steady-at-start': 'the steady state at the first instant', cold: 'a cold wall (at air temperature)' }[initial];
+  return initial.kind === 'uniform' ? `a uniform wall at ${num(toC(initial.temperatureK))} °C` : `the state of ${initial.state.timeLocal} in ${initial.fileName}`;
 }
 
 function verdictSection(summary: Summary): string {
@@ -154,14 +160,23 @@ ${table(['figure', 'value', 'when', 'height m'], rows, 'narrow')}</section>`;
 function keyFiguresSection(summary: Summary): string {
   const r = summary.run;
   const periodic = !r.periodic_requested ? `not requested (${r.days_simulated} day(s) simulated)` : r.periodic_reached ? `reached after ${r.days_simulated} days (last day-to-day change ${num(r.periodic_last_change_k, 4)} K ≤ ${r.periodic_tolerance_k} K)` : `<strong>NOT reached</strong> in ${r.days_simulated} days (last change ${num(r.periodic_last_change_k, 4)} K &gt; ${r.periodic_tolerance_k} K)`;
+  const acc = summary.accuracy;
+  const pm = (v: number | null) => (plusMinus(v, 'K') ? ` ${plusMinus(v, 'K')}` : '');
   const peaks = [
-    ['Hottest outer shell', `${num(summary.peak_shell_c)} °C`, when(summary.peak_shell_time), num(summary.peak_shell_height_m, 1)],
-    ['Hottest lining', `${num(summary.peak_lining_c)} °C`, when(summary.peak_lining_time), num(summary.peak_lining_height_m, 1)],
+    ['Hottest outer shell', `${num(summary.peak_shell_c)} °C${pm(acc.peak_shell_k)}`, when(summary.peak_shell_time), num(summary.peak_shell_height_m, 1)],
+    ['Hottest lining', `${num(summary.peak_lining_c)} °C${pm(acc.peak_lining_k)}`, when(summary.peak_lining_time), num(summary.peak_lining_height_m, 1)],
     ['Coldest inner surface', `${num(summary.min_inner_surface_c)} °C`, when(summary.min_inner_surface_time), num(summary.min_inner_surface_height_m, 1)],
     ['Largest through-wall difference', `${num(summary.through_wall_max_delta_t_k)} K`, when(summary.through_wall_max_delta_t_time), num(summary.through_wall_max_delta_t_height_m, 1)],
-    ['Lowest margin above the water dew point', `${num(summary.lowest_water_dew_margin_k)} K`, when(summary.lowest_water_dew_margin_time), num(summary.lowest_water_dew_margin_height_m, 1)],
-    ...(summary.lowest_acid_dew_margin_k === null ? [] : [['Lowest margin above the acid dew point', `${num(summary.lowest_acid_dew_margin_k)} K`, when(summary.lowest_acid_dew_margin_time), num(summary.lowest_acid_dew_margin_height_m, 1)]]),
+    ['Lowest margin above the water dew point', `${num(summary.lowest_water_dew_margin_k)} K${pm(acc.lowest_water_dew_margin_k)}`, when(summary.lowest_water_dew_margin_time), num(summary.lowest_water_dew_margin_height_m, 1)],
+    ...(summary.lowest_acid_dew_margin_k === null
+      ? []
+      : [['Lowest margin above the acid dew point', `${num(summary.lowest_acid_dew_margin_k)} K${pm(acc.lowest_acid_dew_margin_k)}`, when(summary.lowest_acid_dew_margin_time), num(summary.lowest_acid_dew_margin_height_m, 1)]]),
   ].map(([a, b, c, d]) => `<tr>${td(esc(a))}${td(esc(b), 'n')}${td(esc(c))}${td(esc(d), 'n')}</tr>`);
+  const mesh = r.mesh.layers.filter((l) => l.cells > 0).map((l) => `${l.label} ${l.cells} cells (${num(l.smallest_cell_mm, 1)}–${num(l.largest_cell_mm, 1)} mm)`).join(', ');
+  const accuracy =
+    acc.check === null
+      ? 'Accuracy not estimated (run.accuracy: off).'
+      : `Estimated discretisation error (mesh and time integration): temperatures through the day${pm(acc.temperatures_k)}; peaks and margins as shown beside them. ${acc.method}.${acc.target_k === null ? '' : ` Target ${acc.target_k} K ${acc.target_met ? 'met' : 'NOT met'} after ${acc.refinements} refinement(s).`}`;
   const positions = summary.positions.map((p) => `<tr>${td(esc(p.position.replace(/_/g, ' ')))}${td(num(p.radius_m, 3), 'n')}${td(num(p.min_c), 'n')}${td(num(p.max_c), 'n')}${td(num(p.swing_k), 'n')}${td(num(p.swing_height_m, 1), 'n')}</tr>`);
   const layers = summary.layers.map((l) => `<tr>${td(esc(l.label))}${td(esc(l.material))}${td(num(l.thickness_mm, 1), 'n')}${td(num(l.min_c), 'n')}${td(num(l.max_c), 'n')}${td(num(l.swing_k), 'n')}${td(num(l.max_delta_t_k, 2), 'n')}${td(l.stress_indicator_mpa === null ? MISSING : num(l.stress_indicator_mpa, 3), 'n')}${td(l.max_service_c === null ? MISSING : num(l.max_service_c, 0), 'n')}</tr>`);
   const acid = summary.acid_dew_point_c !== null;
@@ -184,11 +199,13 @@ ${table(['Figure', 'Value'], [
     ['Sun absorbed', `${num(summary.sun_absorbed_kwh_per_day)} kWh/day`],
     ['Convection', `${num(summary.convection_kwh_per_day)} kWh/day`],
     ['Radiation', `${num(summary.radiation_kwh_per_day)} kWh/day`],
-    ['Energy residual (in − stored − out)', `${num(summary.energy_residual_percent, 5)} %`],
+    ['Energy residual (in − stored − out) over the figures\' period, of the energy exchanged', `${num(summary.energy_residual_percent, 5)} %`],
+    ['Energy residual over the whole run', `${num(summary.energy_residual_run_percent, 5)} %`],
     ['Gas exit temperature', `${num(summary.gas_exit_min_c)}–${num(summary.gas_exit_max_c)} °C`],
     ['Draft', `${num(summary.draft_min_pa)}–${num(summary.draft_max_pa)} Pa`],
   ].map(([a, b]) => `<tr>${td(esc(a))}${td(esc(b), 'n')}</tr>`), 'narrow')}
-<p class="note">Run: ${esc(r.integrator)} integrator, ${r.steps} steps; ${r.segments} segments × ${r.nodes_per_segment} nodes; output every ${num(r.output_interval_min, 1)} min.</p>
+<p class="note">Run: ${esc(r.integrator)} integrator, ${r.steps} steps; ${r.segments} segments × ${r.nodes_per_segment} nodes (${esc(mesh)}, graded to ${esc(r.mesh.flue_side_set_by)} inside and ${esc(r.mesh.outside_set_by)} outside); output every ${num(r.output_interval_min, 1)} min.</p>
+<p class="note" id="accuracy">${esc(accuracy)}</p>
 </section>`;
 }
 
@@ -196,10 +213,12 @@ function warmupSection(summary: Summary): string {
   const w = summary.warmup;
   if (w === null) return '';
   const mins = (v: number | null) => (v === null ? 'not within the run' : `${num(v, 1)} min`);
+  const acc = summary.accuracy;
+  const pmMin = (v: number | null) => (plusMinus(v, 'min') ? ` ${plusMinus(v, 'min')}` : '');
   const row = (h: WarmupAtHeight, top: boolean) => `<tr${top ? ' class="top"' : ''}>${td(`${num(h.height_m, 1)}${top ? ' (top)' : ''}`, 'n')}${td(mins(h.minutes_to_water_dew), 'n')}${td(summary.acid_dew_point_c === null ? 'no acid dew point' : mins(h.minutes_to_acid_dew), 'n')}${td(mins(h.minutes_to_shell_90_percent), 'n')}${td(h.minutes_to_shell_touch === null ? 'never / not set' : `${num(h.minutes_to_shell_touch, 1)} min`, 'n')}</tr>`;
   const rows = [...w.by_height].reverse().map((h) => row(h, h.height_m === w.top.height_m));
   return `<section id="warmup"><h2>Warm-up after firing</h2>
-<p>Firing started ${esc(when(w.firing_start_local))}. At the top (${num(w.top.height_m, 1)} m), the inner surface stays above the water dew point plus margin after <strong>${mins(w.top.minutes_to_water_dew)}</strong>${summary.acid_dew_point_c === null ? '' : ` and above the acid dew point plus margin after <strong>${mins(w.top.minutes_to_acid_dew)}</strong>`}.</p>
+<p>Firing started ${esc(when(w.firing_start_local))}. At the top (${num(w.top.height_m, 1)} m), the inner surface stays above the water dew point plus margin after <strong>${mins(w.top.minutes_to_water_dew)}</strong>${pmMin(acc.warmup_minutes_to_water_dew)}${summary.acid_dew_point_c === null ? '' : ` and above the acid dew point plus margin after <strong>${mins(w.top.minutes_to_acid_dew)}</strong>${pmMin(acc.warmup_minutes_to_acid_dew)}`}.</p>
 ${table(['Height (m)', 'To water dew point + margin', 'To acid dew point + margin', 'Shell to 90 % of its rise', 'Shell to touch limit'], rows)}
 </section>`;
 }

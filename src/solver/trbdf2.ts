@@ -18,7 +18,11 @@
  * Shampine 1996, Sect. 3). Step control h_new = h · min(4, max(0.2, 0.9 · err^(−1/3))).
  *
  * Newton: each implicit stage solves z − h d f(t, z) = ψ with the simplified Newton matrix
- * M = I − h d J, J the tridiagonal Jacobian from `system.jacobian`. Policy: J is kept from step to
+ * M = I − h d J, J the tridiagonal Jacobian from `system.jacobian`. The first stage starts from the
+ * previous step's dense output extrapolated to t + γh when the step has grown at most
+ * PREDICTOR_MAX_GROWTH times (the usual starting values of implicit Runge–Kutta codes, Hairer &
+ * Wanner, Solving ODEs II, 2nd ed. 1996, Sect. IV.8), else from explicit Euler (after a start or
+ * a stop); the second from the integral of the line through f1 and f2. Policy: J is kept from step to
  * step while Newton converges quickly (at most two corrections per stage); it is re-evaluated at
  * the current state when a stage needed more, or when Newton fails with an old J (the step is then
  * retried with the same h). Newton failing with a fresh J cuts the step by 4. M is rebuilt for
@@ -87,6 +91,12 @@ const NEWTON_MAX_RATE = 0.9;
 /** More rhs evaluations than this in a stage → refresh J before the next step. */
 const NEWTON_SLOW_EVALUATIONS = 2;
 
+/**
+ * Largest growth of the step over the previous one for which the first stage's predictor
+ * extrapolates the previous step's interpolant (θ = 1 + γ h/h_prev ≤ 2); beyond it, explicit Euler.
+ */
+const PREDICTOR_MAX_GROWTH = 1 / GAMMA;
+
 /** Largest step-size growth per step. */
 const MAX_FACTOR = 4;
 /** Step-size factor after a Newton failure with a fresh Jacobian. */
@@ -98,7 +108,7 @@ const Newton = { Converged: 0, Failed: 1, NonFinite: 2 } as const;
 type NewtonOutcome = (typeof Newton)[keyof typeof Newton];
 
 /**
- * The dense-output value at θ ∈ (0, 1) of a step of size h from (y0, f0) to (y1, f1) into `out`:
+ * The dense-output value at θ ∈ (0, 1) (or, for a predictor, θ up to 2) of a step of size h from (y0, f0) to (y1, f1) into `out`:
  * cubic Hermite, or (withoutStartSlope) the quadratic p = y0 + θ(y1 − y0) + θ(θ − 1)(h f1 − (y1 − y0)),
  * which matches y0, y1 and the end slope.
  */
@@ -158,9 +168,11 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
   const az = new Float64Array(nAux);
   const auxIntegral = new Float64Array(nAux);
   const yOut = new Float64Array(n);
-  const yPrevious = new Float64Array(n); // the last accepted step's start (the stage-2 predictor)
-  let hPrevious = 0;
-  let havePrevious = false;
+  // the previous accepted step (start state, slope, size, whether it was the first after a start or stop), for the predictor
+  const yPrev = new Float64Array(n);
+  const fPrev = new Float64Array(n);
+  let hPrev = 0;
+  let prevFresh = false;
   let freshStart = true; // f1 is a fresh evaluation after a start or a stop (see the dense output)
   const outputs = dense?.instants ?? [];
   let nextOutput = 0;
@@ -235,7 +247,7 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
       h = Math.max(Math.min(h, 8 * guessInitialStep(system, t, y, f1, stop - t, 2, atol, rtol, z, fz, az, stats)), minimumStep(t));
     }
     freshStart = true;
-    havePrevious = false;
+    hPrev = 0;
     let previousRejected = false;
     while (t < stop) {
       if (stats.steps + stats.rejected + stats.newtonFailures >= maxSteps) {
@@ -259,22 +271,10 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
         mUpper[i] = -hd * jUpper[i];
       }
 
-      // Stage 2: trapezoid to t + γh; predictor: the quadratic through the last step's start, its
-      // end y_n and the slope f_n there, extrapolated (explicit Euler after a start or a stop)
-      if (havePrevious) {
-        const theta = 1 + (GAMMA * hStep) / hPrevious;
-        const c = theta * (theta - 1);
-        for (let i = 0; i < n; i++) {
-          psi[i] = y[i] + hd * f1[i];
-          const dy = y[i] - yPrevious[i];
-          z[i] = yPrevious[i] + theta * dy + c * (hPrevious * f1[i] - dy);
-        }
-      } else {
-        for (let i = 0; i < n; i++) {
-          psi[i] = y[i] + hd * f1[i];
-          z[i] = y[i] + GAMMA * hStep * f1[i];
-        }
-      }
+      // Stage 2: trapezoid to t + γh; predictor: the previous step's interpolant, or explicit Euler.
+      for (let i = 0; i < n; i++) psi[i] = y[i] + hd * f1[i];
+      if (hPrev > 0 && hStep <= PREDICTOR_MAX_GROWTH * hPrev) interpolate(1 + (GAMMA * hStep) / hPrev, hPrev, yPrev, fPrev, y, f1, prevFresh, z);
+      else for (let i = 0; i < n; i++) z[i] = y[i] + GAMMA * hStep * f1[i];
       let outcome: NewtonOutcome = solveStage(t + GAMMA * hStep, hd, f2, a2);
       let slow = stageEvaluations > NEWTON_SLOW_EVALUATIONS;
       if (outcome === Newton.Converged) {
@@ -320,10 +320,11 @@ export const integrateTrBdf2: Integrator = (system, y0, t0, stops, options, onSt
           }
           nextOutput++;
         }
-        yPrevious.set(y);
-        hPrevious = hStep;
-        havePrevious = true;
         t = tNew;
+        yPrev.set(y);
+        fPrev.set(f1);
+        hPrev = hStep;
+        prevFresh = freshStart;
         y.set(z);
         f1.set(f3);
         a1.set(a3);

@@ -67,7 +67,7 @@ describe('the compiled package', () => {
     expect(dev, dev.stderr).toEqual({ code: 0, stderr: '' });
 
     const files = readdirSync(compiledOut).sort();
-    expect(files).toEqual(['segments.csv', 'summary.json', 'timeseries.csv']);
+    expect(files).toEqual(['segments.csv', 'state.json', 'summary.json', 'timeseries.csv']);
     expect(readdirSync(tsxOut).sort()).toEqual(files);
     for (const f of files) expect(readFileSync(join(compiledOut, f)).equals(readFileSync(join(tsxOut, f))), f).toBe(true);
   });

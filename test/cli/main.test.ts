@@ -126,12 +126,12 @@ describe('bad input', () => {
 });
 
 describe('a good run', () => {
-  it('writes summary.json, timeseries.csv and segments.csv and exits 0', async () => {
+  it('writes summary.json, timeseries.csv, segments.csv and state.json and exits 0', async () => {
     const file = scenarioFile('good');
     const out = join(dir, 'good-out');
     const r = await runCli(['run', file, '--out', out, '--no-charts', '--quiet']);
     expect(r.code).toBe(0);
-    expect(readdirSync(out).sort()).toEqual(['segments.csv', 'summary.json', 'timeseries.csv']);
+    expect(readdirSync(out).sort()).toEqual(['segments.csv', 'state.json', 'summary.json', 'timeseries.csv']);
     const summary = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
     expect(summary.peak_shell_c).toBeTypeOf('number');
     expect(JSON.stringify(summary)).not.toMatch(/NaN/);

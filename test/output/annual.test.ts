@@ -79,7 +79,7 @@ describe('monthly.csv and cycles.csv', () => {
 
   it('are written with summary.json for an annual run', async () => {
     const names = (await finalArtefacts(run, { charts: false })).map((a) => a.fileName);
-    expect(names).toEqual(['summary.json', 'monthly.csv', 'cycles.csv']);
+    expect(names).toEqual(['summary.json', 'state.json', 'monthly.csv', 'cycles.csv']);
   });
 });
 

@@ -2,6 +2,8 @@
 import { describe, it, expect } from 'vitest';
 import { timeseriesCsv, segmentsCsv, summaryJson } from '../../src/output/write.ts';
 import { resultSheet } from '../../src/output/console.ts';
+import { plusMinus } from '../../src/output/format.ts';
+import { simulateWithAccuracy, summariseRun } from '../../src/analysis/metrics/index.ts';
 import { demoStudy } from '../support/demoStudy.ts';
 
 const study = demoStudy('cycle');
@@ -42,5 +44,25 @@ describe('result sheet', () => {
     expect(p).toBeLessThan(c);
     expect(text).toMatch(/licensed engineer/);
     expect(text).toMatch(/FAIL {2}Margin above the acid dew point/); // the demo's acid margin fails (regression check of the demo)
+  });
+
+  it('states the estimated error beside the peaks and margins, and the mesh and tolerances, when the run was checked', () => {
+    const checked = simulateWithAccuracy(study.inputs);
+    const summary = summariseRun({ inputs: study.inputs, result: checked.result, version: 'test', accuracy: checked.accuracy }).summary;
+    const text = resultSheet(summary).join('\n');
+    expect(text).toContain(`hottest lining`);
+    expect(text).toMatch(/hottest lining +[\d.]+ °C +± [\d.<]+/);
+    expect(text).toMatch(/lowest margin -?[\d.]+ K ± /);
+    expect(text).toMatch(/ACCURACY\n  estimated error: temperatures through the day ± [\d.]+ K/);
+    expect(text).toMatch(/mesh: lining \d+ \([\d.]+–[\d.]+ mm\), insulation \d+ .*graded to the 30 min ramp from 05:00/);
+    // the demo study above was not checked: its sheet says so
+    expect(resultSheet(study.summary).join('\n')).toMatch(/ACCURACY\n  not estimated/);
+  });
+
+  it('writes an estimate with two significant digits, and very small ones as below a thousandth', () => {
+    expect(plusMinus(0.06549, 'K')).toBe('± 0.065 K');
+    expect(plusMinus(1.26, 'min')).toBe('± 1.3 min');
+    expect(plusMinus(0.0002, 'K')).toBe('± < 0.001 K');
+    expect(plusMinus(null, 'K')).toBe('');
   });
 });

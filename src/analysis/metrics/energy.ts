@@ -26,7 +26,7 @@ export function heatPerDay(e: EnergyAccount): Pick<Summary, 'heat_loss_kwh_per_d
     sun_absorbed_kwh_per_day: perDay(e.sunJ),
     convection_kwh_per_day: perDay(e.convectionJ),
     radiation_kwh_per_day: perDay(e.radiationJ),
-    energy_residual_percent: round(e.residualPercent, 5),
+    energy_residual_percent: round(e.residualPercent, 6),
   };
 }
 

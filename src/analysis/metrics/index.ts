@@ -20,11 +20,14 @@ import { warmupTimes } from './warmup.ts';
 import { verdicts } from './verdicts.ts';
 import { DailyExtremes } from './daily.ts';
 import { replaySeries } from '../../model/sinks.ts';
+import { meshSummary } from './mesh.ts';
+import { accuracyStatement, accuracyWarning, type AccuracyOutcome } from './accuracy.ts';
 
 export { evaluationInstants, type Location } from './evaluated.ts';
 export { DailyExtremes } from './daily.ts';
 export { fractionBelowZero } from './dewPoints.ts';
 export { timeToReach, timeToStayAbove } from './warmup.ts';
+export { simulateWithAccuracy, type AccuracyOutcome, type CheckedRun } from './accuracy.ts';
 export type { PositionSwingAt } from './extremes.ts';
 
 export interface SummaryContext {
@@ -39,6 +42,8 @@ export interface SummaryContext {
   readonly daily?: DailyExtremes;
   /** An annual run's figures (analysis/annual, from the statistics a sink gathered while the run went): the summary's `annual` section. */
   readonly annual?: AnnualSummary;
+  /** The accuracy check of the run (from `simulateWithAccuracy`); without it the summary states no estimate. */
+  readonly accuracy?: AccuracyOutcome;
 }
 
 /**
@@ -108,7 +113,7 @@ function locations(
 }
 
 /** The summary of a run (summary.json) and where each of its located figures occurs. */
-export function summariseRun({ inputs, result, version, description, daily, annual }: SummaryContext): SummarisedRun {
+export function summariseRun({ inputs, result, version, description, daily, annual, accuracy }: SummaryContext): SummarisedRun {
   const mode = inputs.run.mode;
   const ev = evaluated(result.series, mode);
   const extremes = wallExtremes(ev);
@@ -130,6 +135,9 @@ export function summariseRun({ inputs, result, version, description, daily, annu
   if (residual !== null) warnings.push(residual);
   const outerDiameter = 2 * result.series.nodeRadius[result.series.nodes - 1]!;
   const sectors = sectorFigures(ev, inputs.layers, outerDiameter, inputs.stack.height, extremes.peakShell);
+  const statement = accuracyStatement(inputs, accuracy);
+  const accuracyNote = accuracyWarning(statement);
+  if (accuracyNote !== null) warnings.push(accuracyNote);
 
   const summary: Summary = {
     tool: { name: 'stackday', version },
@@ -153,7 +161,11 @@ export function summariseRun({ inputs, result, version, description, daily, annu
       output_interval_min: round(inputs.run.outputInterval / 60, 2),
       segments: ev.S,
       nodes_per_segment: ev.N,
+      relative_tolerance: result.solve.rtol,
+      absolute_tolerance_k: result.solve.atol,
+      mesh: meshSummary(result),
     },
+    accuracy: statement,
     verdicts: verdictList,
     all_limits_pass: [...verdictList, ...(annual?.verdicts ?? [])].every((v) => v.status !== 'fail'),
     ...wallExtremeFigures(ev, extremes),
@@ -163,6 +175,7 @@ export function summariseRun({ inputs, result, version, description, daily, annu
     ...dewPointFigures(ev, margins),
     ...gasAndDraftRanges(ev),
     ...heatPerDay(energy),
+    energy_residual_run_percent: round(result.energy.run.residualPercent, 6),
     warmup,
     daily: dailyFigures(result, daily),
     ...(annual ? { annual } : {}),

@@ -39,31 +39,53 @@ export function timeToReach(times: readonly number[], values: readonly number[],
 /** Shell rise, K, below which the time to 90 % of it is not reported (the shell barely warms). */
 const MIN_SHELL_RISE_K = 0.1;
 
+/** Warm-up times at one height, s from firing start (null: not within the run, or not asked for), unrounded. */
+export interface WarmupSeconds {
+  readonly toWaterDew: number | null;
+  readonly toAcidDew: number | null;
+  readonly toShell90Percent: number | null;
+  readonly toShellTouch: number | null;
+}
+
+/**
+ * Warm-up times of segment `seg`, in seconds from `firingStartT` (s, on the series' time axis).
+ * With sectors: the coldest inner surface round the height (the dew points) and the hottest shell
+ * (the touch limit, 90 % of the rise).
+ */
+export function warmupSecondsAt(ev: Evaluated, seg: number, firingStartT: number, limits: LimitsInput): WarmupSeconds {
+  const { series: s, ks, N, T, sectors } = ev;
+  const acrossSectors = (k: number, i: number, pick: (a: number, b: number) => number) => {
+    let v = T(k, seg * sectors, i);
+    for (let j = 1; j < sectors; j++) v = pick(v, T(k, seg * sectors + j, i));
+    return v;
+  };
+  const inner = ks.map((k) => acrossSectors(k, 0, Math.min));
+  const shell = ks.map((k) => acrossSectors(k, N - 1, Math.max));
+  const tt = ks.map((k) => s.t[k]! - firingStartT);
+  const shellRise = shell[shell.length - 1]! - shell[0]!;
+  return {
+    toWaterDew: timeToStayAbove(tt, inner, s.waterDewPointK + (limits.waterDewMarginK ?? 0)),
+    toAcidDew: s.acidDewPointK === null ? null : timeToStayAbove(tt, inner, s.acidDewPointK + (limits.acidDewMarginK ?? 0)),
+    toShell90Percent: shellRise > MIN_SHELL_RISE_K ? timeToReach(tt, shell, shell[0]! + 0.9 * shellRise) : null,
+    toShellTouch: limits.shellTouchK === undefined ? null : timeToReach(tt, shell, limits.shellTouchK),
+  };
+}
+
 /**
  * Warm-up times at every height, bottom → top, in minutes from `firingStartT` (s, on the series'
  * time axis); the firing start is stated as the first output instant.
  */
 export function warmupTimes(ev: Evaluated, firingStartT: number, limits: LimitsInput): NonNullable<Summary['warmup']> {
-  const { series: s, ks, S, N, T, sectors } = ev;
-  const times = Array.from(s.t, (t) => t - firingStartT);
-  // with sectors: the coldest inner surface at the height (the dew points) and the hottest shell (the touch limit)
-  const acrossSectors = (k: number, seg: number, i: number, pick: (a: number, b: number) => number) => {
-    let v = T(k, seg * sectors, i);
-    for (let j = 1; j < sectors; j++) v = pick(v, T(k, seg * sectors + j, i));
-    return v;
-  };
+  const { series: s, S } = ev;
   const atHeight = (seg: number): WarmupAtHeight => {
-    const inner = ks.map((k) => acrossSectors(k, seg, 0, Math.min));
-    const shell = ks.map((k) => acrossSectors(k, seg, N - 1, Math.max));
-    const tt = ks.map((k) => times[k]!);
+    const w = warmupSecondsAt(ev, seg, firingStartT, limits);
     const min = (x: number | null) => (x === null ? null : round(x / 60, 1));
-    const shellRise = shell[shell.length - 1]! - shell[0]!;
     return {
       height_m: round(s.heightM[seg]!, 2),
-      minutes_to_water_dew: min(timeToStayAbove(tt, inner, s.waterDewPointK + (limits.waterDewMarginK ?? 0))),
-      minutes_to_acid_dew: s.acidDewPointK === null ? null : min(timeToStayAbove(tt, inner, s.acidDewPointK + (limits.acidDewMarginK ?? 0))),
-      minutes_to_shell_90_percent: shellRise > MIN_SHELL_RISE_K ? min(timeToReach(tt, shell, shell[0]! + 0.9 * shellRise)) : null,
-      minutes_to_shell_touch: limits.shellTouchK === undefined ? null : min(timeToReach(tt, shell, limits.shellTouchK)),
+      minutes_to_water_dew: min(w.toWaterDew),
+      minutes_to_acid_dew: min(w.toAcidDew),
+      minutes_to_shell_90_percent: min(w.toShell90Percent),
+      minutes_to_shell_touch: min(w.toShellTouch),
     };
   };
   const byHeight = Array.from({ length: S }, (_, seg) => atHeight(seg));

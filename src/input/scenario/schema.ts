@@ -23,6 +23,15 @@ interface Bounds {
   readonly wording?: string;
 }
 
+/**
+ * Default tolerances of the integrator. Chosen so that the time-integration error stays a fraction
+ * of the 0.1 K the defaults aim at (docs/model.md "Accuracy"): measured on the demo and on a
+ * three-layer wall under a one-hour ramp against tight references, rtol 1e-5 / atol 0.01 K left up
+ * to 0.09 K of time error; these leave about a third of that, beside the mesh's share.
+ */
+export const DEFAULT_RELATIVE_TOLERANCE = 5e-6;
+export const DEFAULT_ABSOLUTE_TOLERANCE_K = 5e-3;
+
 // Messages below start with "expected …": errors.ts puts the path and the value found (as written) in front.
 
 /** A value with a unit; output is the SI number. Every message names the quantity, its unit and its range. */
@@ -204,8 +213,8 @@ const layer = z.strictObject({
 });
 
 const stack = z.strictObject({
-  height: quantity('length', { min: 0, exclusiveMin: true, max: 500, wording: 'a height above 0 m and up to 500 m' }, 'Height of the stack above its base'),
-  inner_diameter: quantity('length', { min: 0.05, max: 30, wording: 'a diameter from 0.05 m to 30 m' }, 'Inner (flue) diameter'),
+  height: quantity('length', { min: 0, exclusiveMin: true, wording: 'a positive height' }, 'Height of the stack above its base (proportions that weaken the model are warned about, not refused)'),
+  inner_diameter: quantity('length', { min: 0, exclusiveMin: true, wording: 'a positive diameter' }, 'Inner (flue) diameter'),
   segments: count(1, LIMITS.segments, 'axial segments', 'Axial segments the height is cut into').default(12),
   sectors: count(1, 72, 'circumferential sectors', 'Circumferential sectors of the wall: 1 averages the sun round the circumference; 8 to 36 resolve the sun-facing side').default(1),
   layers: z
@@ -259,12 +268,17 @@ const designDay = z.strictObject({
   wind_daily_amplitude: ratio(0, 1, 'a fraction of the mean', 'Daily swing of the wind speed, peaking mid-afternoon').default(0.3),
   cloud_cover: ratio(0, 1, 'a fraction', 'Cloud cover').default(0),
   dew_point: temperature(-100, 60, 'a dew point', 'Dew point of the outside air (default: the daily minimum air temperature, FAO-56 eq. 48)').optional(),
+  shape: z
+    .enum(['ashrae-2009', 'sinusoid'])
+    .default('ashrae-2009')
+    .meta({ description: 'Daily course of the air temperature: the published hourly profile (ASHRAE 2009, minimum 05:00, maximum 15:00), or a pure sinusoid with its minimum at minimum_at.' }),
+  minimum_at: clockTime.optional().meta({ description: 'Local clock time of the minimum of a sinusoidal day, "HH:MM" (default "05:00").' }),
 });
 
 const weather = z
   .strictObject({
     design_day: designDay.optional(),
-    file: text('the path of a weather CSV file').optional().meta({ description: 'Hourly weather CSV, path relative to the scenario file.' }),
+    file: text('the path of a weather CSV file').optional().meta({ description: 'Weather file (CSV hourly or finer, EPW or TMY3), path relative to the scenario file.' }),
     wind_reference_height: quantity('length', { min: 0.5, max: 300, wording: 'a height from 0.5 m to 300 m' }, 'Height of the wind measurement').prefault(10),
     wind_station_terrain: z
       .enum(Object.keys(TERRAIN_EXPONENTS) as [Terrain, ...Terrain[]])
@@ -439,11 +453,24 @@ const run = z.strictObject({
   periodic_tolerance: quantity('temperatureDifference', { min: 0, exclusiveMin: true, wording: 'a positive temperature difference' }, 'Largest day-to-day change of any node for the periodic state').prefault(0.05),
   max_days: count(1, LIMITS.days, 'days', 'Most days to try for the periodic state').default(30),
   output_interval: quantity('duration', { min: 60, max: 6 * 3600, wording: 'an interval from 1 min to 6 h' }, 'Interval between output instants').prefault(10),
-  initial: z.enum(['steady', 'steady-at-start', 'cold']).default('steady').meta({ description: 'Initial wall: steady at the daily-mean conditions, steady at the first instant, or cold (at air temperature).' }),
+  initial: z
+    .union([
+      z.enum(['steady', 'steady-at-start', 'cold']),
+      z.strictObject({ temperature: temperature(-60, 1500, 'a wall temperature', 'Temperature of the whole wall at the start') }),
+      z.strictObject({ from: z.string().min(1).meta({ description: 'A state.json written by an earlier run (path relative to the scenario file): the wall continues from where that run ended.' }) }),
+    ])
+    .default('steady')
+    .meta({ description: 'Initial wall: steady at the daily-mean conditions, steady at the first instant, cold (at air temperature), {temperature: 12} (uniform), or {from: state.json} (where an earlier run ended).' }),
   firing_start: clockTime.optional(),
   integrator: z.enum(Object.keys(INTEGRATORS) as [IntegratorName, ...IntegratorName[]]).default('implicit'),
-  relative_tolerance: ratio(1e-9, 1e-2, 'a relative tolerance', 'Relative tolerance of the integrator').default(1e-5),
-  absolute_tolerance: quantity('temperatureDifference', { min: 1e-6, max: 1, wording: 'a temperature difference from 1e-6 K to 1 K' }, 'Absolute tolerance of the integrator').prefault(0.01),
+  relative_tolerance: ratio(1e-9, 1e-2, 'a relative tolerance', 'Relative tolerance of the integrator').default(DEFAULT_RELATIVE_TOLERANCE),
+  absolute_tolerance: quantity('temperatureDifference', { min: 1e-6, max: 1, wording: 'a temperature difference from 1e-6 K to 1 K' }, 'Absolute tolerance of the integrator').prefault(DEFAULT_ABSOLUTE_TOLERANCE_K),
+  accuracy: z
+    .union([z.enum(['estimate', 'off']), quantity('temperatureDifference', { min: 0, exclusiveMin: true, wording: 'a positive temperature difference' }, 'Accuracy target')], {
+      error: () => `expected "estimate", "off" or an accuracy target: ${describeExpected('temperatureDifference', 'a positive temperature difference')}`,
+    })
+    .default('estimate')
+    .meta({ description: 'Accuracy statement: "estimate" (a second solve on a finer mesh at tighter tolerances gives ± on every reported figure), "off", or a target in K that the run is refined toward.' }),
 });
 
 /** What a run writes of one per-instant file. */

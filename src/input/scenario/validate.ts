@@ -12,6 +12,9 @@ import { LIMITS, grouped, sizeProblems } from './limits.ts';
 import { flowPlausibility, type ScheduledFlow } from './flow.ts';
 import { readTextFile } from '../text.ts';
 import type { ModelInputs, LayerInput, WeatherInput, FiringPointInput, GasCompositionInput, FlueSchedule, AnnualInput, SeriesFileInput } from '../../model/inputs.ts';
+import type { InitialWall } from '../../model/inputs.ts';
+import { wallStateMismatch } from '../../model/wallState.ts';
+import { readStateFile, StateFileError } from '../state.ts';
 import type { Material, PropertyTable } from '../../physics/materials/types.ts';
 import { findMaterial } from '../../physics/materials/index.ts';
 import { validateTable } from '../../physics/properties/table.ts';
@@ -211,6 +214,8 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       problems.push(`weather.design_day.max_air_temperature: found ${c(d.max_air_temperature)}; expected at least the minimum, ${c(d.min_air_temperature)}`);
     const dew = d.dew_point ?? d.min_air_temperature;
     if (dew > d.max_air_temperature + 0.01) problems.push(`weather.design_day.dew_point: found ${c(dew)}; expected at most the maximum air temperature, ${c(d.max_air_temperature)}`);
+    if (d.minimum_at !== undefined && d.shape !== 'sinusoid')
+      problems.push(`weather.design_day.minimum_at: found it with shape ${d.shape}; expected it only with shape: sinusoid (the published profile has its minimum at 05:00)`);
     if (clock && problems.length === 0) {
       const source = makeDesignDay(
         {
@@ -221,6 +226,8 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
           referenceHeightM: refHeight,
           cloudCover: d.cloud_cover,
           dewPointK: dew,
+          temperatureShape: d.shape,
+          minimumHour: (d.minimum_at ?? 5 * 3600) / 3600,
         },
         clock,
         { latitudeDeg: s.site.latitude, longitudeDeg: s.site.longitude },
@@ -276,6 +283,7 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
   if (s.run.output_interval > SECONDS_PER_DAY / 2) problems.push(`run.output_interval: found ${s.run.output_interval / 60} min; expected at most 12 h`);
   const output = outputFiles(s, span.annual !== undefined);
   problems.push(...outputProblems(s, output));
+  const initial = initialWall(s, layers, baseDir, problems);
 
   if (problems.length > 0 || !weather || !composition || !schedule || !span.length) return null;
 
@@ -324,11 +332,12 @@ function toModelInputs(s: Scenario, baseDir: string, problems: string[]): ModelI
       mode: s.run.mode,
       length: span.length,
       outputInterval: s.run.output_interval,
-      initial: s.run.mode === 'warmup' ? 'cold' : s.run.initial === 'steady' ? 'steady-daily-mean' : s.run.initial,
+      initial: initial!,
       integrator: s.run.integrator,
       rtol: s.run.relative_tolerance,
       atol: s.run.absolute_tolerance,
       firingStartClockS: s.run.firing_start,
+      accuracy: s.run.accuracy === 'estimate' || s.run.accuracy === 'off' ? { kind: s.run.accuracy } : { kind: 'target', targetK: s.run.accuracy },
     },
     output,
     limits: {
@@ -516,6 +525,34 @@ function outputProblems(s: Scenario, files: { timeseries: SeriesFileInput; segme
     if (content !== 'all' && content !== 'last-day') problems.push(`${key}: found an interval with output.${file} ${content}${s.output[file] === undefined ? ' (the default of an annual run)' : ''}; expected output.${file} all or last-day (the interval thins their rows)`);
   }
   return problems;
+}
+
+/**
+ * The initial wall: a warm-up starts cold unless a temperature or a state is given; a state file is
+ * read here and must belong to the same wall (layers, thicknesses, flue diameter, segments). Null
+ * (with the problems noted) when it cannot be used.
+ */
+function initialWall(s: Scenario, layers: readonly LayerInput[], baseDir: string, problems: string[]): InitialWall | null {
+  const given = s.run.initial;
+  if (given === 'steady' || given === 'steady-at-start' || given === 'cold') return s.run.mode === 'warmup' ? 'cold' : given === 'steady' ? 'steady-daily-mean' : given;
+  if ('temperature' in given) return { kind: 'uniform', temperatureK: given.temperature };
+  let state;
+  try {
+    state = readStateFile(resolve(baseDir, given.from), given.from);
+  } catch (e) {
+    if (e instanceof StateFileError) {
+      problems.push(`run.initial.from: ${e.message}`);
+      return null;
+    }
+    throw e;
+  }
+  if (layers.length !== s.stack.layers.length) return null; // a layer problem is already reported
+  const mismatch = wallStateMismatch(state, layers, s.stack.inner_diameter / 2, s.stack.segments, s.stack.sectors);
+  if (mismatch !== null) {
+    problems.push(`run.initial.from: found a state of a different wall in "${given.from}" (${mismatch}); expected the state.json of a run of this wall (same layers, thicknesses, inner diameter and segments)`);
+    return null;
+  }
+  return { kind: 'state', state, fileName: given.from };
 }
 
 /**

@@ -1,5 +1,5 @@
 /**
- * Hourly weather from a CSV file, as a {@link WeatherSource}.
+ * Weather from a CSV file, hourly or finer (any spacing of rows), as a {@link WeatherSource}.
  *
  * Header columns (any order; unknown columns are ignored; lines starting with `#` are comments):
  * - `time` — ISO 8601 local time `YYYY-MM-DDTHH:MM[:SS[.fff]]`, optionally with an offset (`Z`,
@@ -13,8 +13,10 @@
  *   optional.
  *
  * Values are instantaneous at their time stamps and interpolated linearly in time. Rows must be
- * strictly increasing in time with no gap longer than {@link MAX_GAP_HOURS}, and have no more cells
- * than the header has columns (a decimal comma splits a number into two cells: numbers use a
+ * strictly increasing in time with no gap longer than {@link MAX_GAP_HOURS} (nothing limits how
+ * close they may be: sub-hourly files are read the same way, and the shortest spacing is the
+ * source's `timeStepS`, which the automatic mesh resolves at the outer surface), and have no more
+ * cells than the header has columns (a decimal comma splits a number into two cells: numbers use a
  * decimal point). Dates are calendar dates from 1900-01-01 to 2199-12-31. Every row with a problem
  * is reported (up to {@link MAX_ROW_PROBLEMS}); text from the file is shown printable.
  */
@@ -121,7 +123,7 @@ interface Row {
 }
 
 /**
- * Read an hourly weather CSV (see the module comment for the columns). Throws
+ * Read a weather CSV (see the module comment for the columns). Throws
  * {@link WeatherFileError} naming the file, line and column of the first problem found.
  */
 export function parseWeatherCsv(text: string, clock: SiteClock, fileName: string, options: WeatherCsvOptions = {}): WeatherFileSource {
@@ -234,16 +236,24 @@ function makeSource(rows: Row[], fileName: string, referenceHeightM: number, pre
   let dew = col('dew_point_c');
   if (!dew) {
     // FAO-56 (Allen et al. 1998) eq. 48: actual vapour pressure ≈ saturation pressure at the daily
-    // minimum temperature, i.e. dew point ≈ lowest air temperature of the surrounding 24 h.
+    // minimum temperature, i.e. dew point ≈ lowest air temperature of the surrounding 24 h
+    // (a sliding-window minimum over a queue of row indices with increasing temperatures, so that
+    // a sub-hourly file costs no more per row than an hourly one).
     dew = new Float64Array(n);
-    for (let i = 0, lo = 0, hi = 0; i < n; i++) {
-      while (times[lo] < times[i] - 12 * 3_600_000) lo++;
-      while (hi + 1 < n && times[hi + 1] <= times[i] + 12 * 3_600_000) hi++;
-      let m = Infinity;
-      for (let k = lo; k <= hi; k++) m = Math.min(m, air[k]);
-      dew[i] = m;
+    const window: number[] = [];
+    let head = 0;
+    for (let i = 0, hi = -1; i < n; i++) {
+      while (hi + 1 < n && times[hi + 1] <= times[i] + 12 * 3_600_000) {
+        hi++;
+        while (window.length > head && air[window[window.length - 1]!] >= air[hi]) window.pop();
+        window.push(hi);
+      }
+      while (times[window[head]!] < times[i] - 12 * 3_600_000) head++;
+      dew[i] = air[window[head]!];
     }
   }
+  let timeStepS = Infinity;
+  for (let i = 1; i < n; i++) timeStepS = Math.min(timeStepS, (times[i] - times[i - 1]) / 1000);
   const firstUtcMs = times[0];
   const lastUtcMs = times[n - 1];
   const iso = (utcMs: number) => new TZDate(utcMs, timeZone).toISOString();
@@ -263,6 +273,7 @@ function makeSource(rows: Row[], fileName: string, referenceHeightM: number, pre
   return {
     fileName,
     referenceHeightM,
+    timeStepS,
     firstUtcMs,
     lastUtcMs,
     rowCount: n,

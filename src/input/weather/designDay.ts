@@ -44,8 +44,18 @@ export function fractionOfDailyRangeCosine(hour: number, sunriseHour: number, pe
   return (1 - Math.cos((Math.PI * (h - peakHour)) / (sunriseHour + 24 - peakHour))) / 2;
 }
 
+/**
+ * A pure sinusoid with its minimum at `minimumHour` (local clock hours) and its maximum 12 h later,
+ * as the fraction of the daily range below the maximum: f = (1 + cos(2π (hour − minimumHour)/24))/2
+ * (1 at the minimum, 0 at the maximum), the textbook periodic surface condition (Carslaw & Jaeger
+ * 1959, §2.6). Example: minimum at 5 h, at 11 h → (1 + cos(π/2))/2 = 0.5; at 17 h → 0.
+ */
+export function fractionOfDailyRangeSinusoid(hour: number, minimumHour: number): number {
+  return (1 + Math.cos((2 * Math.PI * (hour - minimumHour)) / 24)) / 2;
+}
+
 /** Shape of the daily air-temperature course. */
-export type DesignDayShape = 'ashrae-2009' | 'cosine-sunrise';
+export type DesignDayShape = 'ashrae-2009' | 'cosine-sunrise' | 'sinusoid';
 
 /** Options of {@link makeDesignDay}. SI units, temperatures in K. */
 export interface DesignDayOptions {
@@ -55,11 +65,14 @@ export interface DesignDayOptions {
   readonly maxAirTemperatureK: number;
   /**
    * Daily course: `ashrae-2009` (default; ASHRAE 2009 Table 6, minimum 05:00, maximum 15:00 local
-   * clock time) or `cosine-sunrise` (minimum at the day's sunrise, maximum at `peakHour`).
+   * clock time), `cosine-sunrise` (minimum at the day's sunrise, maximum at `peakHour`) or
+   * `sinusoid` (minimum at `minimumHour`, maximum 12 h later).
    */
   readonly temperatureShape?: DesignDayShape;
   /** Local clock hour of the maximum for `cosine-sunrise`, default 15. */
   readonly peakHour?: number;
+  /** Local clock hour of the minimum for `sinusoid`, default 5 (as in the ASHRAE profile). */
+  readonly minimumHour?: number;
   /** Daily mean wind speed at the reference height, m/s. */
   readonly windSpeed: number;
   /** Amplitude of the daily wind cycle, m/s (0 ≤ amplitude ≤ windSpeed), default 0. */
@@ -85,7 +98,7 @@ export interface DesignDayOptions {
 export function makeDesignDay(options: DesignDayOptions, clock: SiteClock, site: SiteLocation): WeatherSource {
   const {
     minAirTemperatureK: tMin, maxAirTemperatureK: tMax, windSpeed,
-    temperatureShape = 'ashrae-2009', peakHour = 15, windAmplitude = 0, windPeakHour = 15,
+    temperatureShape = 'ashrae-2009', peakHour = 15, minimumHour = 5, windAmplitude = 0, windPeakHour = 15,
     referenceHeightM = STANDARD_WIND_HEIGHT_M, cloudCover = 0,
   } = options;
   const dewPointK = options.dewPointK ?? tMin;
@@ -95,6 +108,7 @@ export function makeDesignDay(options: DesignDayOptions, clock: SiteClock, site:
   if (!(cloudCover >= 0 && cloudCover <= 1)) throw new RangeError(`design day: cloud cover ${cloudCover} must lie within 0–1`);
   if (!(referenceHeightM > 0)) throw new RangeError(`design day: reference height ${referenceHeightM} m must be > 0`);
   if (!(peakHour > 0 && peakHour < 24)) throw new RangeError(`design day: peak hour ${peakHour} must lie within 0–24`);
+  if (!(minimumHour >= 0 && minimumHour <= 24)) throw new RangeError(`design day: minimum hour ${minimumHour} must lie within 0–24`);
   if (!(dewPointK > 0)) throw new RangeError(`design day: dew point ${dewPointK} K must be > 0 K`);
 
   const sunriseCache = new Map<number, number>();
@@ -118,7 +132,9 @@ export function makeDesignDay(options: DesignDayOptions, clock: SiteClock, site:
       const hour = clock.localSecondsOfDay(t) / 3600;
       const f = temperatureShape === 'ashrae-2009'
         ? fractionOfDailyRangeAshrae(hour)
-        : fractionOfDailyRangeCosine(hour, sunriseHour(clock.dayIndex(t)), peakHour);
+        : temperatureShape === 'sinusoid'
+          ? fractionOfDailyRangeSinusoid(hour, minimumHour)
+          : fractionOfDailyRangeCosine(hour, sunriseHour(clock.dayIndex(t)), peakHour);
       const airTemperatureK = tMax - f * (tMax - tMin);
       return {
         airTemperatureK,

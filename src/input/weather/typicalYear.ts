@@ -371,6 +371,8 @@ export function makeTypicalYearSource(
     site,
     fileName,
     referenceHeightM,
+    // hourly rows, interpolated linearly: the automatic mesh resolves the hour at the outer surface
+    timeStepS: HOUR_MS / 1000,
     calendarYear: year,
     firstUtcMs,
     lastUtcMs,

@@ -18,6 +18,12 @@ export interface AirState {
 export interface WeatherSource {
   /** Height above ground at which `windSpeed` is given, m. */
   readonly referenceHeightM: number;
+  /**
+   * Shortest time between the source's data points, s, for a source read from data (its values are
+   * interpolated between them, so they may change that fast); undefined for a smooth source such
+   * as a design day.
+   */
+  readonly timeStepS?: number;
   /** Conditions at the UTC instant `utcMs`. */
   at(utcMs: number): AirState;
 }

@@ -10,10 +10,32 @@
  * cylindrical-shell value 2πk / ln(r_b / r_a), with k taken at the mean of the two node temperatures;
  * node control volumes run between the radii of the cell mid-points (half-cells at the surfaces).
  * Axial conduction is neglected (radial conduction dominates in slender walls).
+ *
+ * Cells: a layer with a given cell count gets that many equal cells; a layer with `auto` gets the
+ * automatic rule of cells.ts — graded from the faces the forcing acts on (every layer's inner face
+ * with the flue side's time scale, the outermost layer's outer face with the outside's), fine at
+ * the face and growing inward. The time scales are computed by the model from the scenario and
+ * passed in (`MeshForcing`); without them both faces get the daily time scale.
  */
 import type { Material } from '../materials/types.ts';
 import { makeTableLookup, integrateTable } from '../properties/table.ts';
-import { SECONDS_PER_DAY } from '../constants.ts';
+import { autoLayerCells, uniformLayerCells, DAILY_TIME_SCALE_S, type LayerCells } from './cells.ts';
+
+/** The temperature at which a layer's diffusivity sizes its automatic cells, K. */
+const MESH_DIFFUSIVITY_TEMPERATURE_K = 400;
+
+/** The forcing the automatic mesh must resolve, and a refinement of the whole mesh. */
+export interface MeshForcing {
+  /** Shortest time scale of the forcing at the flue side (gas temperature and flow), s. */
+  readonly flueSideTimeScaleS: number;
+  /** Shortest time scale of the forcing at the outer surface (weather), s. */
+  readonly outsideTimeScaleS: number;
+  /** Every layer's cells × this whole number (default 1): the nested finer mesh of an accuracy check. */
+  readonly refinement?: number;
+}
+
+/** Daily time scales on both faces and no refinement: the mesh when nothing faster forces the wall. */
+export const DAILY_FORCING: MeshForcing = { flueSideTimeScaleS: DAILY_TIME_SCALE_S, outsideTimeScaleS: DAILY_TIME_SCALE_S };
 
 /** One layer of the wall as the mesh needs it (the model's `LayerInput`). SI units. */
 export interface WallLayer {
@@ -22,7 +44,7 @@ export interface WallLayer {
   readonly material: Material;
   /** Layer thickness, m. */
   readonly thickness: number;
-  /** Cells across the layer, or `auto` (sized to the daily penetration depth). Ignored for gaps. */
+  /** Cells across the layer, or `auto` (graded to the forcing, cells.ts). Ignored for gaps. */
   readonly cells: number | 'auto';
   /** Contact resistance to the next layer outward, m² K/W (0 = perfect contact). */
   readonly contactResistanceToNext: number;
@@ -53,6 +75,8 @@ export interface WallMesh {
   readonly linkGeometry: Float64Array;
   /** Conduction links: k(T) lookup of the layer's material. */
   readonly linkConductivity: readonly (((T: number) => number) | null)[];
+  /** Conduction links: the layer's material (its conductivity table). */
+  readonly linkMaterial: readonly (Material | null)[];
   /** Gap links: the gap's geometry and surface emissivities. */
   readonly linkGap: readonly (GapLink | null)[];
   /** Up to two capacity parts per node: mass per metre of height (kg/m) and cp(T) lookup. */
@@ -74,6 +98,10 @@ export interface WallMesh {
   readonly gapRadiationFactorAtNode: Float64Array;
   readonly innerRadius: number;
   readonly outerRadius: number;
+  /** Cells of each layer, inside → outside (0 for a gap). */
+  readonly layerCells: readonly number[];
+  /** Indices of the automatic layers whose cell count MAX_AUTO_CELLS capped. */
+  readonly cappedLayers: readonly number[];
 }
 
 /** Thermal diffusivity k/(ρ c_p) of a solid material at temperature T, m²/s. */
@@ -84,23 +112,49 @@ export function thermalDiffusivity(material: Material, temperatureK: number): nu
 }
 
 /**
- * Automatic cell count of a layer: cells no thicker than an eighth of the daily penetration depth
- * δ = √(2α/ω) = √(α P / π) (Carslaw & Jaeger 1959, §2.6), at least 2 and at most 24.
+ * The cells of layer j of `layers` under `forcing`: the given count (× the refinement) or the
+ * automatic rule, the inner face forced from the flue side and the outermost layer's outer face
+ * from outside.
  */
-export function autoCellCount(material: Material, thickness: number): number {
-  const alpha = thermalDiffusivity(material, 400);
-  const depth = Math.sqrt((alpha * SECONDS_PER_DAY) / Math.PI);
-  return Math.min(24, Math.max(2, Math.ceil(thickness / (depth / 8))));
+export function layerCells(layers: readonly WallLayer[], j: number, forcing: MeshForcing): LayerCells {
+  const layer = layers[j]!;
+  const refinement = forcing.refinement ?? 1;
+  if (layer.cells !== 'auto') return uniformLayerCells(layer.thickness, layer.cells * refinement);
+  const outermost = j === layers.length - 1;
+  return autoLayerCells(
+    layer.thickness,
+    thermalDiffusivity(layer.material, MESH_DIFFUSIVITY_TEMPERATURE_K),
+    { innerTimeScaleS: forcing.flueSideTimeScaleS + diffusionTimeBefore(layers, j), outerTimeScaleS: outermost ? forcing.outsideTimeScaleS : Infinity },
+    refinement,
+  );
 }
 
-/** Build the mesh for the wall layers (inside → outside) starting at the flue radius `innerRadius`. */
-export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number): WallMesh {
+/**
+ * Σ L²/α over the solid layers inside layer j, s: a disturbance from the flue reaches layer j
+ * smoothed over at least the diffusion time of each layer it crossed (gaps and contacts store no
+ * heat and add none).
+ */
+export function diffusionTimeBefore(layers: readonly WallLayer[], j: number): number {
+  let total = 0;
+  for (let k = 0; k < j; k++) {
+    const l = layers[k]!;
+    if (l.material.kind === 'solid') total += (l.thickness * l.thickness) / thermalDiffusivity(l.material, MESH_DIFFUSIVITY_TEMPERATURE_K);
+  }
+  return total;
+}
+
+/**
+ * Build the mesh for the wall layers (inside → outside) starting at the flue radius `innerRadius`,
+ * with automatic layers graded to `forcing` (default: the daily wave on both faces).
+ */
+export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number, forcing: MeshForcing = DAILY_FORCING): WallMesh {
   const radius: number[] = [];
   const label: string[] = [];
   const layerNodes: [number, number][] = [];
   const linkKind: number[] = [];
   const linkGeometry: number[] = [];
   const linkConductivity: (((T: number) => number) | null)[] = [];
+  const linkMaterial: (Material | null)[] = [];
   const linkGap: (GapLink | null)[] = [];
   const capMassA: number[] = [];
   const capCpA: ((T: number) => number)[] = [];
@@ -112,6 +166,8 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
   const radialExtentB: number[] = [];
   const gapWidthAtNode: number[] = [];
   const gapRadiationFactorAtNode: number[] = [];
+  const cellCounts: number[] = [];
+  const cappedLayers: number[] = [];
 
   const addNode = (r: number, name: string) => {
     radius.push(r);
@@ -142,11 +198,12 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
       radialExtentB[node] += rOut - rIn;
     }
   };
-  const addLink = (kind: number, geometry: number, k: ((T: number) => number) | null, gap: GapLink | null) => {
+  const addLink = (kind: number, geometry: number, k: ((T: number) => number) | null, gap: GapLink | null, material: Material | null = null) => {
     linkKind.push(kind);
     linkGeometry.push(geometry);
     linkConductivity.push(k);
     linkGap.push(gap);
+    linkMaterial.push(material);
   };
 
   let r = innerRadius;
@@ -172,10 +229,14 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
       gapWidthAtNode[current] = layer.thickness;
       pendingGapFace = { width: layer.thickness, factor: 1 / (1 / prev.emissivity + 1 / next.emissivity - 1) };
       gapRadiationFactorAtNode[current] = pendingGapFace.factor;
+      cellCounts.push(0);
       r = rOut;
       return;
     }
-    const cells = layer.cells === 'auto' ? autoCellCount(layer.material, layer.thickness) : layer.cells;
+    const { faces, capped } = layerCells(layers, j, forcing);
+    const cells = faces.length - 1;
+    cellCounts.push(cells);
+    if (capped) cappedLayers.push(j);
     const kLookup = makeTableLookup(layer.material.conductivity);
     const shareFirst = current >= 0 && pendingLink === null;
     let first: number;
@@ -194,14 +255,13 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
         pendingLink = null;
       }
     }
-    const dr = layer.thickness / cells;
     for (let c = 1; c <= cells; c++) {
-      const ra = rIn + (c - 1) * dr;
-      const rb = c === cells ? rOut : rIn + c * dr;
+      const ra = rIn + faces[c - 1]!;
+      const rb = c === cells ? rOut : rIn + faces[c]!;
       const isLast = c === cells;
       const lastName = j === layers.length - 1 ? 'outer_surface' : layer.contactResistanceToNext > 0 ? `${interfaceName(j + 1)}_in` : layers[j + 1]!.material.kind === 'gap' ? interfaceName(j + 1) : interfaceName(j + 1);
       const node = addNode(rb, isLast ? lastName : `node_${radius.length}`);
-      addLink(LINK_CONDUCTION, (2 * Math.PI) / Math.log(rb / ra), kLookup, null);
+      addLink(LINK_CONDUCTION, (2 * Math.PI) / Math.log(rb / ra), kLookup, null, layer.material);
       const rm = 0.5 * (ra + rb);
       addCapacity(node - 1, layer.material, ra, rm);
       addCapacity(node, layer.material, rm, rb);
@@ -224,6 +284,7 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
     linkKind: Uint8Array.from(linkKind),
     linkGeometry: Float64Array.from(linkGeometry),
     linkConductivity,
+    linkMaterial,
     linkGap,
     capMassA: Float64Array.from(capMassA),
     capCpA,
@@ -237,6 +298,8 @@ export function buildWallMesh(layers: readonly WallLayer[], innerRadius: number)
     gapRadiationFactorAtNode: Float64Array.from(gapRadiationFactorAtNode),
     innerRadius,
     outerRadius: r,
+    layerCells: cellCounts,
+    cappedLayers,
   };
 }
 

@@ -116,7 +116,7 @@ describe('the annual summary', () => {
       const d = new Date(Date.UTC(2026, 0, 30, k));
       return { hours: k, iso: `${d.toISOString().slice(0, 19)}+00:00`, deltaK: 0, acidMarginK: 10 };
     });
-    const day = (lossKwh: number): EnergyAccount => ({ gasToWallJ: 2 * lossKwh * 3.6e6, convectionJ: lossKwh * 3.6e6, radiationJ: 0, sunJ: 0, storedJ: 0, residualPercent: 0, periodS: 86400 });
+    const day = (lossKwh: number): EnergyAccount => ({ gasToWallJ: 2 * lossKwh * 3.6e6, convectionJ: lossKwh * 3.6e6, radiationJ: 0, sunJ: 0, storedJ: 0, grossJ: 3 * lossKwh * 3.6e6, residualJ: 0, residualPercent: 0, periodS: 86400 });
     const inputs = { annual: { firstDay: '2026-01-30', lastDay: '2026-02-01', given: 'last-day' }, limits: {}, run: { outputInterval: HOUR } } as unknown as ModelInputs;
     const s = annualSummary(rec.parts(), [day(10), day(20), day(40)], inputs);
     expect(s.days).toBe(3);

@@ -88,3 +88,44 @@ describe('the weather file is read only when it is text of a reasonable size', (
     expect(problemsOf(withWeatherFile('binary.csv'), { baseDir: dir })[0]).toMatch(/^weather\.file: found "binary\.csv"; expected a readable weather file: an hourly CSV, an EPW or a TMY3 file \(it is not text: 8 bytes, 4 of them not printable UTF-8/);
   });
 });
+
+describe('issue 10: geometry, design-day shape, initial wall and accuracy', () => {
+  it('accepts any positive inner diameter, 40 m windshields included (no arbitrary cap)', () => {
+    const s = demo();
+    s.stack.inner_diameter = '40 m';
+    expect(validateModelInputs(s).inputs.stack.innerDiameter).toBe(40);
+    s.stack.inner_diameter = 0;
+    expect(() => validateModelInputs(s)).toThrow(/stack\.inner_diameter: found 0; expected a length: a positive diameter/);
+  });
+
+  it('takes a sinusoidal design day with its minimum at a given time, and refuses minimum_at with the published profile', () => {
+    const s = demo();
+    s.weather.design_day.shape = 'sinusoid';
+    s.weather.design_day.minimum_at = '04:00';
+    const { inputs } = validateModelInputs(s);
+    const clockAt = (h: number) => Date.parse(`2026-07-15T${String(h).padStart(2, '0')}:00:00+02:00`);
+    // minimum 12 °C at 04:00, maximum 26 °C at 16:00 (the demo's range)
+    expect(inputs.weather.source.at(clockAt(4)).airTemperatureK).toBeCloseTo(285.15, 9);
+    expect(inputs.weather.source.at(clockAt(16)).airTemperatureK).toBeCloseTo(299.15, 9);
+    const t = demo();
+    t.weather.design_day.minimum_at = '04:00';
+    expect(() => validateModelInputs(t)).toThrow(/weather\.design_day\.minimum_at: found it with shape ashrae-2009; expected it only with shape: sinusoid/);
+  });
+
+  it('reads run.accuracy as estimate (default), off, or a target in K', () => {
+    const s = demo();
+    expect(validateModelInputs(s).inputs.run.accuracy).toEqual({ kind: 'estimate' });
+    s.run.accuracy = 'off';
+    expect(validateModelInputs(s).inputs.run.accuracy).toEqual({ kind: 'off' });
+    s.run.accuracy = '0.05 K';
+    expect(validateModelInputs(s).inputs.run.accuracy).toEqual({ kind: 'target', targetK: 0.05 });
+    s.run.accuracy = 0;
+    expect(() => validateModelInputs(s)).toThrow(/run\.accuracy/);
+  });
+
+  it('reads a uniform initial wall in °C', () => {
+    const s = demo();
+    s.run.initial = { temperature: 12 };
+    expect(validateModelInputs(s).inputs.run.initial).toEqual({ kind: 'uniform', temperatureK: 285.15 });
+  });
+});

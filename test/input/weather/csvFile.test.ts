@@ -88,6 +88,35 @@ describe('parseWeatherCsv: a good file', () => {
   });
 });
 
+describe('parseWeatherCsv: a sub-hourly file', () => {
+  // every 10 minutes for two days, a sawtooth of the air temperature, no dew-point column
+  const rows = [HEADER.replace(',dew_point_c', '')];
+  const minutes = 2 * 24 * 60;
+  const air = (m: number) => 10 + ((m * 7) % 23) - 0.002 * m;
+  for (let m = 0; m <= minutes; m += 10) {
+    const t = new Date(Date.UTC(2026, 6, 14, 0, m) - 2 * 3600_000).toISOString().slice(0, 16);
+    rows.push(`${t}Z,${air(m).toFixed(3)},2.0,0.2`);
+  }
+  const src = parseWeatherCsv(rows.join('\n'), clock, FILE);
+
+  it('is read like an hourly one, with its 10 min step as the time step', () => {
+    expect(src.rowCount).toBe(minutes / 10 + 1);
+    expect(src.timeStepS).toBe(600);
+    // linear between rows (hand computation): 00:05 local is halfway between the 00:00 and 00:10 rows
+    expect(src.at(clock.utcMs(300)).airTemperatureK).toBeCloseTo(273.15 + (Number(air(0).toFixed(3)) + Number(air(10).toFixed(3))) / 2, 9);
+  });
+
+  it('takes the dew point as the lowest air temperature within ±12 h, as a brute-force search does', () => {
+    // FAO-56 eq. 48 (Allen et al. 1998) as the module applies it, against the direct search over the rows
+    for (const m of [0, 355, 720, 1440, 2870]) {
+      let lowest = Infinity;
+      for (let j = Math.max(0, m - 720); j <= Math.min(minutes, m + 720); j += 10) lowest = Math.min(lowest, Number(air(j).toFixed(3)));
+      const at = src.at(clock.utcMs(m * 60 - (m % 10) * 60));
+      expect(at.dewPointK, `at ${m} min`).toBeCloseTo(Math.min(lowest + 273.15, at.airTemperatureK), 9);
+    }
+  });
+});
+
 describe('parseWeatherCsv: bad files name file, line and column', () => {
   it('missing required column', () => {
     const e = errorOf(['time,air_temperature_c', '2026-07-14T00:00,14', '2026-07-14T01:00,13'].join('\n'));

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import * as Astronomy from 'astronomy-engine';
 import { makeSiteClock } from '../../../src/model/clock.ts';
-import { ASHRAE_DAILY_RANGE_FRACTION, fractionOfDailyRangeAshrae, fractionOfDailyRangeCosine, makeDesignDay } from '../../../src/input/weather/designDay.ts';
+import { ASHRAE_DAILY_RANGE_FRACTION, fractionOfDailyRangeAshrae, fractionOfDailyRangeCosine, fractionOfDailyRangeSinusoid, makeDesignDay } from '../../../src/input/weather/designDay.ts';
 
 const site = { latitudeDeg: 59.91, longitudeDeg: 10.75 };
 const clock = makeSiteClock('Europe/Oslo', '2026-07-14');
@@ -82,5 +82,19 @@ describe('makeDesignDay', () => {
     expect(() => makeDesignDay({ ...base, maxAirTemperatureK: 280 }, clock, site)).toThrow(/minimum/);
     expect(() => makeDesignDay({ ...base, windAmplitude: 5 }, clock, site)).toThrow(/amplitude/);
     expect(() => makeDesignDay({ ...base, cloudCover: 2 }, clock, site)).toThrow(/cloud/);
+  });
+});
+
+describe('sinusoidal design day', () => {
+  it('is a pure cosine with its minimum at the given hour and its maximum 12 h later', () => {
+    // T = T_mean − A cos(2π (hour − hour_min)/24) (the periodic surface condition of Carslaw & Jaeger 1959, §2.6)
+    const src = makeDesignDay({ ...base, temperatureShape: 'sinusoid', minimumHour: 4 }, clock, site);
+    const mean = (285.15 + 297.15) / 2;
+    const amplitude = (297.15 - 285.15) / 2;
+    for (const hour of [0, 4, 7, 10, 13, 16, 22.5]) {
+      expect(sample(src, 1, hour).airTemperatureK, `${hour} h`).toBeCloseTo(mean - amplitude * Math.cos((2 * Math.PI * (hour - 4)) / 24), 9);
+    }
+    expect(fractionOfDailyRangeSinusoid(4, 4)).toBe(1);
+    expect(fractionOfDailyRangeSinusoid(16, 4)).toBeCloseTo(0, 15);
   });
 });

@@ -1,6 +1,6 @@
 /** The radial mesh: geometry and capacities by exact geometry, labels, contact and gap links. */
 import { describe, it, expect } from 'vitest';
-import { buildWallMesh, autoCellCount, nodeCapacity, nodeEnthalpyChange, LINK_CONTACT, LINK_GAP } from '../../../src/physics/wall/mesh.ts';
+import { buildWallMesh, nodeCapacity, nodeEnthalpyChange, LINK_CONTACT, LINK_GAP } from '../../../src/physics/wall/mesh.ts';
 import { gapConductancePerMetre } from '../../../src/physics/wall/gap.ts';
 import { findMaterial } from '../../../src/physics/materials/index.ts';
 import { airPropertiesAt } from '../../../src/physics/properties/air.ts';
@@ -52,17 +52,6 @@ describe('buildWallMesh', () => {
   it('refuses an air gap on the inside or outside', () => {
     const gap = findMaterial('air-gap')!;
     expect(() => buildWallMesh([layer(gap, 0.02), layer(a, 0.1, 2)], 1)).toThrow(/air gap/);
-  });
-});
-
-describe('autoCellCount', () => {
-  it('sizes cells to an eighth of the daily penetration depth √(αP/π) (Carslaw & Jaeger §2.6), 2 to 24 cells', () => {
-    const k = 1.0;
-    const alpha = k / (2000 * 900);
-    const depth = Math.sqrt((alpha * 86400) / Math.PI);
-    expect(autoCellCount(a, 0.1)).toBe(Math.ceil(0.1 / (depth / 8)));
-    expect(autoCellCount(a, 0.001)).toBe(2);
-    expect(autoCellCount(a, 5)).toBe(24);
   });
 });
 
