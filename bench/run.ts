@@ -9,12 +9,15 @@
  * 3. Where the time goes: the same day with the outside correlations and sun switched off, and
  *    with the inside correlation switched off; the differences are their costs.
  * 4. Charts: the time to render every chart of the demo.
+ * 5. Start-up of the compiled command (startup.ts).
+ * 6. Sweeps: where the pool of worker threads pays, and a 100-point sweep serially against the pool (sweep.ts).
  */
 import { loadScenarioFile } from '../src/input/scenario/load.ts';
 import { simulate } from '../src/model/simulate.ts';
 import type { ModelInputs } from '../src/model/inputs.ts';
 import type { RunResult } from '../src/model/timeseries.ts';
 import { benchStartup } from './startup.ts';
+import { benchSweep } from './sweep.ts';
 
 /** Runs before timing: V8 needs about this many one-day runs before its optimised code settles. */
 const WARM_UP_RUNS = 10;
@@ -122,3 +125,4 @@ try {
   console.log(`4. charts: not measured (${(e as Error).message})`);
 }
 benchStartup();
+benchSweep();

@@ -315,6 +315,23 @@ const limits = z.strictObject({
   water_dew_margin: quantity('temperatureDifference', { min: 0, wording: 'a margin of zero or more' }, 'Required margin of the inner surface above the water dew point').optional(),
 });
 
+/**
+ * Variants of the scenario in the same file, by name: each a mapping of overrides (a section merged
+ * key by key, a list or a value replaced, a key path such as `stack.layers[1].thickness` setting one
+ * value, null removing a key). Each variant is validated as its own scenario by validate.ts.
+ */
+const variants = z
+  .record(z.string(), z.unknown())
+  .meta({ description: 'Named variants of this scenario (for `stackday compare`): each a mapping of the keys it changes, e.g. `stack.layers[1].thickness: 100 mm`.' })
+  .check((ctx) => {
+    for (const [name, changes] of Object.entries(ctx.value)) {
+      if (!/^[A-Za-z0-9][A-Za-z0-9._-]*$/.test(name))
+        ctx.issues.push({ code: 'custom', input: name, path: [name], message: `found the name ${show(name)}; expected a variant name of letters, digits, ".", "_" or "-"` });
+      else if (changes === null || typeof changes !== 'object' || Array.isArray(changes))
+        ctx.issues.push({ code: 'custom', input: changes, path: [name], message: `found ${show(changes)}; expected a mapping of the keys the variant changes` });
+    }
+  });
+
 export const scenarioSchema = z
   .strictObject({
     name: z.string().regex(/^[A-Za-z0-9][A-Za-z0-9._-]*$/, 'expected a short name of letters, digits, ".", "_" or "-"').meta({ description: 'Scenario name; also the default output folder out/<name>/.' }),
@@ -327,6 +344,7 @@ export const scenarioSchema = z
     flue,
     run: run.prefault({}),
     limits: limits.prefault({}),
+    variants: variants.optional(),
   })
   .meta({ title: 'stackday scenario', description: 'A stack, its wall build-up, the site, the weather, the firing and the run.' });
 
