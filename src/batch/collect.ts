@@ -8,7 +8,7 @@ import { join, resolve } from 'node:path';
 import { ScenarioError } from '../input/scenario/errors.ts';
 import type { Summary } from '../analysis/summary.ts';
 import { traceOfCsv } from '../output/trace.ts';
-import type { CaseOutcome } from './runCase.ts';
+import type { CaseOutcome } from './outcome.ts';
 import { MANIFEST, type PlanManifest } from './plan.ts';
 
 /** Read a plan's manifest; ScenarioError (bad input) when the folder holds none. */

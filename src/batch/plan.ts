@@ -5,7 +5,7 @@
  * gathers the runs' results into the sweep's table and charts.
  *
  * The planned files are the points' scenarios as the one validation path sees them (the overrides
- * applied), with a weather file copied into the plan, so the plan folder can be moved as a whole.
+ * applied), with their weather files copied into the plan, so the plan folder can be moved as a whole.
  */
 import { copyFileSync, mkdirSync, writeFileSync, chmodSync, existsSync } from 'node:fs';
 import { basename, join, resolve } from 'node:path';
@@ -15,7 +15,6 @@ import { validateCase, type ScenarioCase } from '../input/scenario/cases.ts';
 import { ScenarioError } from '../input/scenario/errors.ts';
 import { formatPath } from '../input/scenario/errors.ts';
 import type { SweepAxis, SweepPoint } from '../input/scenario/sweep.ts';
-import { VERSION } from '../index.ts';
 
 /** The manifest of a plan (manifest.json). Paths are relative to the plan folder. */
 export interface PlanManifest {
@@ -41,12 +40,31 @@ export interface PlannedPoint {
 }
 
 export const MANIFEST = 'manifest.json';
+
+/** Whether `dir` holds a plan already. */
+export const holdsPlan = (dir: string): boolean => existsSync(join(resolve(dir), MANIFEST));
 export const SCENARIO_LIST = 'scenarios.txt';
 
-/** The raw scenario of a case as a planned file holds it: the overrides applied, a weather file pointing at the plan's copy. */
-function plannedScenario(c: ScenarioCase, weatherCopy: string | null): unknown {
-  const s = withOverrides(c.raw, c.overrides) as { weather?: { file?: string } };
-  if (weatherCopy && s.weather?.file) s.weather.file = weatherCopy;
+/**
+ * The raw scenario of a case as a planned file holds it: the overrides applied, and its weather
+ * file (if any) copied into the plan's weather/ folder once (`copies`: source path → name there)
+ * and named relative to the planned file.
+ */
+function plannedScenario(c: ScenarioCase, root: string, copies: Map<string, string>): unknown {
+  const s = withOverrides(c.raw, c.overrides) as { weather?: { file?: unknown } };
+  const file = s.weather?.file;
+  if (typeof file !== 'string') return s;
+  const source = resolve(c.baseDir, file);
+  let name = copies.get(source);
+  if (name === undefined) {
+    const taken = new Set(copies.values());
+    name = basename(source);
+    for (let n = 2; taken.has(name); n++) name = `${n}-${basename(source)}`;
+    mkdirSync(join(root, 'weather'), { recursive: true });
+    copyFileSync(source, join(root, 'weather', name));
+    copies.set(source, name);
+  }
+  s.weather!.file = `../weather/${name}`;
   return s;
 }
 
@@ -77,21 +95,15 @@ function scripts(count: number, name: string): { fileName: string; text: string 
 
 /**
  * Write a plan for the sweep into `dir`: scenarios/<point>.yaml for every valid point, the
- * manifest, the list of scenario files and the scripts. Returns the manifest.
+ * manifest (with the tool's `version`), the list of scenario files and the scripts. Returns the
+ * manifest. A folder that holds a plan already is refused (the caller checks with `holdsPlan`).
  */
-export function writePlan(dir: string, source: string, axes: readonly SweepAxis[], points: readonly SweepPoint[], cases: readonly ScenarioCase[]): PlanManifest {
+export function writePlan(dir: string, source: string, axes: readonly SweepAxis[], points: readonly SweepPoint[], cases: readonly ScenarioCase[], version: string): PlanManifest {
   const root = resolve(dir);
-  if (existsSync(join(root, MANIFEST))) throw new ScenarioError([`${dir}: holds a plan already (${MANIFEST}); choose an empty folder`]);
+  if (holdsPlan(root)) throw new Error(`${dir} holds a plan already (${MANIFEST})`);
   mkdirSync(join(root, 'scenarios'), { recursive: true });
   mkdirSync(join(root, 'runs'), { recursive: true });
-  // one copy of the weather file for every point (a sweep does not change it)
-  const weatherFile = (cases[0]?.raw as { weather?: { file?: unknown } } | undefined)?.weather?.file;
-  let weatherCopy: string | null = null;
-  if (typeof weatherFile === 'string' && cases[0]) {
-    mkdirSync(join(root, 'weather'), { recursive: true });
-    copyFileSync(resolve(cases[0].baseDir, weatherFile), join(root, 'weather', basename(weatherFile)));
-    weatherCopy = `../weather/${basename(weatherFile)}`;
-  }
+  const copies = new Map<string, string>();
   const planned: PlannedPoint[] = points.map((p, i) => {
     const c = cases[i]!;
     const out = `runs/${p.name}`;
@@ -103,10 +115,10 @@ export function writePlan(dir: string, source: string, axes: readonly SweepAxis[
     }
     const file = `scenarios/${p.name}.yaml`;
     const what = p.values.map((v, j) => `${formatPath(axes[j]!.path)} = ${v.text}`).join(', ');
-    writeFileSync(join(root, file), `# Planned by stackday sweep from ${basename(source)}: ${what}\n${stringify(plannedScenario(c, weatherCopy), { lineWidth: 0 })}`);
+    writeFileSync(join(root, file), `# Planned by stackday sweep from ${basename(source)}: ${what}\n${stringify(plannedScenario(c, root, copies), { lineWidth: 0 })}`);
     return { name: p.name, values: p.values, status: 'planned', file, out, problems: [] };
   });
-  const manifest: PlanManifest = { tool: 'stackday', version: VERSION, kind: 'sweep', source, axes, points: planned };
+  const manifest: PlanManifest = { tool: 'stackday', version, kind: 'sweep', source, axes, points: planned };
   writeFileSync(join(root, MANIFEST), `${JSON.stringify(manifest, null, 2)}\n`);
   const files = planned.flatMap((p) => (p.file ? [p.file] : []));
   writeFileSync(join(root, SCENARIO_LIST), files.map((f) => `${f}\n`).join(''));

@@ -1,13 +1,14 @@
 /**
- * Running a batch of cases: serially in this thread, or on a pool of worker threads that each load
- * the model once and take cases from a queue. Outcomes come back in the order of the cases, and a
- * case's figures do not depend on the thread that ran it (the same code on the same inputs), so
- * the files a batch writes are byte-identical whatever the thread count.
+ * Running a batch of cases: serially in this thread, or on a pool of threads — worker threads that
+ * each load the model once, and this thread — that take cases from one queue. Outcomes come back
+ * in the order of the cases, and a case's figures do not depend on the thread that ran it (the same
+ * code on the same inputs), so the files a batch writes are byte-identical whatever the thread count.
  *
  * A fresh worker costs its start-up (loading the model's modules) and, more, its JIT warm-up: its
- * first few runs are several times slower than the same runs in a warmed-up thread. A pool pays
- * only when the batch is long enough to amortise that; `chooseThreads` holds the measured
- * break-even (bench/sweep.ts measures it again).
+ * first few runs are several times slower than the same runs in a warmed-up thread. So the main
+ * thread runs cases too (with N threads, N − 1 workers start), and a pool is used only when the
+ * batch is long enough to amortise a worker; `chooseThreads` holds the measured break-even
+ * (bench/sweep.ts measures it again).
  *
  * Workers run the compiled JavaScript (dist/batch/worker.js). Run from the TypeScript sources (tsx,
  * vitest), a worker first registers tsx's loader, then loads worker.ts.
@@ -19,7 +20,7 @@ import { pathToFileURL } from 'node:url';
 import { readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import type { ScenarioCase } from '../input/scenario/cases.ts';
-import { runCase, type CaseOutcome } from './runCase.ts';
+import type { CaseOutcome } from './outcome.ts';
 import type { WorkerJob, WorkerReply } from './worker.ts';
 
 /**
@@ -56,24 +57,43 @@ function startWorker(): Worker {
   return new Worker(new URL(`data:text/javascript,${encodeURIComponent(boot)}`));
 }
 
-/** A pool of worker threads that load the model once and run cases from a queue; reuse it for several batches, then close it. */
+/** Jobs a worker holds at once (the one it runs and the next), so it never waits for the main thread to hand it work. */
+const WORKER_DEPTH = 2;
+
+/**
+ * A pool of threads that run cases from one queue: `threads − 1` worker threads, each loading the
+ * model once, and this (the main) thread, which runs cases between handing them out. Reuse it for
+ * several batches, then close it.
+ */
 export class CasePool {
   private readonly workers: Worker[];
   private busy = false;
 
   constructor(readonly threads: number) {
-    this.workers = Array.from({ length: Math.max(1, threads) }, startWorker);
+    this.workers = Array.from({ length: Math.max(0, threads - 1) }, startWorker);
   }
 
   /** Run the cases on the pool's threads; outcomes in the order of the cases. */
-  run(cases: readonly ScenarioCase[], onProgress?: ProgressCallback): Promise<CaseOutcome[]> {
+  async run(cases: readonly ScenarioCase[], onProgress?: ProgressCallback): Promise<CaseOutcome[]> {
     if (this.busy) throw new Error('the pool is already running a batch');
     this.busy = true;
+    const { runCase } = await import('./runCase.ts');
     const outcomes: CaseOutcome[] = new Array(cases.length);
     let next = 0;
     let done = 0;
-    const listeners: { w: Worker; message: (m: unknown) => void; error: (e: Error) => void; exit: (code: number) => void }[] = [];
+    let stopped = false;
+    const listeners: { w: Worker; message: (reply: WorkerReply) => void; error: (e: Error) => void; exit: (code: number) => void }[] = [];
     const finished = new Promise<CaseOutcome[]>((resolve, reject) => {
+      const fail = (e: Error) => {
+        stopped = true;
+        reject(e);
+      };
+      const record = (index: number, outcome: CaseOutcome) => {
+        outcomes[index] = outcome;
+        done++;
+        onProgress?.(done, cases.length);
+        if (done === cases.length) resolve(outcomes);
+      };
       const feed = (w: Worker) => {
         if (next >= cases.length) return;
         const job: WorkerJob = { index: next, case: cases[next]! };
@@ -82,36 +102,45 @@ export class CasePool {
       };
       if (cases.length === 0) resolve(outcomes);
       for (const w of this.workers) {
-        const message = (m: unknown) => {
-          if (m === 'ready') return;
-          const reply = m as WorkerReply;
-          if ('error' in reply) {
-            reject(new Error(`a worker thread failed on case "${cases[reply.index]?.name}": ${reply.error}`));
-            return;
+        const message = (reply: WorkerReply) => {
+          if ('error' in reply) fail(new Error(`a worker thread failed on case "${cases[reply.index]?.name}": ${reply.error}`));
+          else {
+            record(reply.index, reply.outcome);
+            feed(w);
           }
-          outcomes[reply.index] = reply.outcome;
-          done++;
-          onProgress?.(done, cases.length);
-          if (done === cases.length) resolve(outcomes);
-          else feed(w);
         };
-        const error = (e: Error) => reject(new Error(`a worker thread stopped: ${e.message}`));
-        const exit = (code: number) => reject(new Error(`a worker thread exited with code ${code}`));
+        const error = (e: Error) => fail(new Error(`a worker thread stopped: ${e.message}`));
+        const exit = (code: number) => fail(new Error(`a worker thread exited with code ${code}`));
         w.on('message', message);
         w.on('error', error);
         w.on('exit', exit);
         listeners.push({ w, message, error, exit });
-        feed(w);
+        for (let k = 0; k < WORKER_DEPTH; k++) feed(w);
       }
+      // this thread takes the next case whenever it is free, and lets the workers' answers in between
+      const step = () => {
+        if (stopped || next >= cases.length) return;
+        const index = next++;
+        try {
+          record(index, runCase(cases[index]!));
+        } catch (e) {
+          fail(e as Error);
+          return;
+        }
+        setImmediate(step);
+      };
+      setImmediate(step);
     });
-    return finished.finally(() => {
+    try {
+      return await finished;
+    } finally {
       for (const l of listeners) {
         l.w.off('message', l.message);
         l.w.off('error', l.error);
         l.w.off('exit', l.exit);
       }
       this.busy = false;
-    });
+    }
   }
 
   /** Stop every worker thread. */
@@ -121,7 +150,8 @@ export class CasePool {
 }
 
 /** Run the cases in this thread, one after another. */
-export function runCasesSerially(cases: readonly ScenarioCase[], onProgress?: ProgressCallback): CaseOutcome[] {
+export async function runCasesSerially(cases: readonly ScenarioCase[], onProgress?: ProgressCallback): Promise<CaseOutcome[]> {
+  const { runCase } = await import('./runCase.ts');
   return cases.map((c, i) => {
     const outcome = runCase(c);
     onProgress?.(i + 1, cases.length);

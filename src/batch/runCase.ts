@@ -8,19 +8,10 @@ import { validateCase, type ScenarioCase } from '../input/scenario/cases.ts';
 import { ScenarioError } from '../input/scenario/errors.ts';
 import { SimulationError } from '../model/errors.ts';
 import type { Summary } from '../analysis/summary.ts';
-import { traceOfSeries, type RunTrace } from '../output/trace.ts';
+import { traceOfSeries } from '../output/trace.ts';
 import { summaryJson } from '../output/write.ts';
 import { runScenario } from '../index.ts';
-
-/** What became of one case: it ran, it is not a valid scenario, or its run could not be computed. */
-export type CaseOutcome =
-  | { readonly name: string; readonly status: 'ran'; readonly summary: Summary; readonly trace: RunTrace }
-  | { readonly name: string; readonly status: 'invalid' | 'failed'; readonly problems: readonly string[] };
-
-/** The outcomes that ran, with their summaries and traces. */
-export type RanOutcome = Extract<CaseOutcome, { status: 'ran' }>;
-
-export const hasRun = (o: CaseOutcome): o is RanOutcome => o.status === 'ran';
+import type { CaseOutcome } from './outcome.ts';
 
 /** Run one case (in whichever thread calls it). */
 export function runCase(c: ScenarioCase): CaseOutcome {

@@ -6,13 +6,13 @@
  */
 import { readScenarioFile } from '../input/scenario/load.ts';
 import { validateCase, type ScenarioCase } from '../input/scenario/cases.ts';
-import type { SweepAxis, SweepPoint } from '../input/scenario/sweep.ts';
+import { axisLeaf, type SweepAxis, type SweepPoint } from '../input/scenario/sweep.ts';
 import { compareBuildUps, type Comparison } from '../analysis/compare.ts';
 import { sweepTable, type SweepTable } from '../analysis/sweep.ts';
 import type { NotRun } from '../analysis/compare.ts';
 import type { OverlayCase } from '../output/charts/overlayParts.ts';
 import { dirname, resolve } from 'node:path';
-import { hasRun, type CaseOutcome } from './runCase.ts';
+import { hasRun, type CaseOutcome } from './outcome.ts';
 import { chooseThreads, runCases, type ProgressCallback } from './pool.ts';
 
 export interface BatchOptions {
@@ -50,8 +50,8 @@ export interface SweepStudy {
   readonly overlay: readonly OverlayCase[];
 }
 
-/** The label of a sweep point in overlay legends: its values as written. */
-export const pointLabel = (p: Pick<SweepPoint, 'values'>): string => p.values.map((v) => v.text).join(', ');
+/** The label of a sweep point in overlay legends: each swept key's last name and its value as written, `thickness 40 mm, emissivity 0.9`. */
+export const pointLabel = (axes: readonly SweepAxis[], p: Pick<SweepPoint, 'values'>): string => p.values.map((v, i) => `${axisLeaf(axes[i]!)} ${v.text}`).join(', ');
 
 /** The table of a sweep from its points' outcomes (in the order of the points), and the runs to overlay (labelled by value). */
 export function sweepStudy(axes: readonly SweepAxis[], points: readonly Pick<SweepPoint, 'name' | 'values'>[], outcomes: readonly CaseOutcome[]): SweepStudy {
@@ -64,7 +64,7 @@ export function sweepStudy(axes: readonly SweepAxis[], points: readonly Pick<Swe
   );
   const overlay = points.flatMap((p, i) => {
     const o = outcomes[i]!;
-    return hasRun(o) ? [{ label: pointLabel(p), summary: o.summary, trace: o.trace }] : [];
+    return hasRun(o) ? [{ label: pointLabel(axes, p), summary: o.summary, trace: o.trace }] : [];
   });
   return { table, notRun: notRunOf(outcomes), overlay };
 }

@@ -5,6 +5,7 @@
 import { parentPort } from 'node:worker_threads';
 import { runCase } from './runCase.ts';
 import type { ScenarioCase } from '../input/scenario/cases.ts';
+import type { CaseOutcome } from './outcome.ts';
 
 /** A case for a worker, with its index in the batch. */
 export interface WorkerJob {
@@ -13,7 +14,7 @@ export interface WorkerJob {
 }
 
 /** A worker's answer: the outcome of the job, or the error that stopped it (a defect, not bad input). */
-export type WorkerReply = { readonly index: number; readonly outcome: ReturnType<typeof runCase> } | { readonly index: number; readonly error: string };
+export type WorkerReply = { readonly index: number; readonly outcome: CaseOutcome } | { readonly index: number; readonly error: string };
 
 if (parentPort) {
   const port = parentPort;
@@ -26,5 +27,4 @@ if (parentPort) {
     }
     port.postMessage(reply);
   });
-  port.postMessage('ready');
 }

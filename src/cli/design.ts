@@ -15,13 +15,13 @@ import { notRunLines, sizingSheet, sweepSheet } from '../output/designSheets.ts'
 import { writeArtefactsAtomically } from '../output/write.ts';
 import { comparisonStudy, runBatch, sweepCases, sweepStudy, type SweepStudy } from '../batch/study.ts';
 import { CasePool, chooseThreads, runCasesSerially } from '../batch/pool.ts';
-import { writePlan, SCENARIO_LIST } from '../batch/plan.ts';
+import { holdsPlan, writePlan, SCENARIO_LIST } from '../batch/plan.ts';
 import { collectOutcomes, readManifest } from '../batch/collect.ts';
-import type { CaseOutcome } from '../batch/runCase.ts';
+import type { CaseOutcome } from '../batch/outcome.ts';
 import { batchProgress } from './progress.ts';
+import { VERSION } from './version.ts';
 import { BadInput, parseChartSize, parseThreads } from './options.ts';
 import { EXIT_BAD_INPUT, EXIT_LIMIT_FAILED, EXIT_OK, EXIT_SOME_NOT_RUN } from './exitCodes.ts';
-
 
 export interface BatchCommandOptions {
   out?: string;
@@ -109,7 +109,8 @@ export async function sweepCommand(file: string, opts: SweepCommandOptions): Pro
   const points = spec(() => sweepPoints(axes));
   const cases = sweepCases(file, points);
   if (opts.plan) {
-    const manifest = writePlan(opts.plan, file, axes, points, cases);
+    if (holdsPlan(opts.plan)) throw new BadInput(`--plan: ${opts.plan} holds a plan already (manifest.json); choose a new folder`);
+    const manifest = writePlan(opts.plan, file, axes, points, cases, VERSION);
     const planned = manifest.points.filter((p) => p.status === 'planned').length;
     const notRun: NotRun[] = manifest.points.filter((p) => p.status === 'invalid').map((p) => ({ scenario: p.name, status: 'invalid', problems: p.problems }));
     reportNotRun(notRun, points.length);
@@ -175,7 +176,7 @@ export async function sizeCommand(file: string, opts: SizeCommandOptions): Promi
   const evaluate = async (values: readonly SweptValue[]): Promise<SizingProbe[]> => {
     const points = sweepPoints([{ ...axis, values }]);
     const cases = sweepCases(file, points);
-    const outcomes = pool ? await pool.run(cases) : runCasesSerially(cases);
+    const outcomes = pool ? await pool.run(cases) : await runCasesSerially(cases);
     return outcomes.map((o, i) => (o.status === 'ran' ? { value: values[i]!, status: 'ran', summary: o.summary } : { value: values[i]!, status: o.status, problems: o.problems }));
   };
   let result;

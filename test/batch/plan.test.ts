@@ -56,6 +56,17 @@ describe('serial, pooled and planned-then-collected sweeps', () => {
     expect(csv.map((l) => l.split(',').slice(0, 3).join(','))).toEqual(['stack.layers[1].thickness (mm),name,status', '-5,thickness-minus5mm,invalid', '30,thickness-30mm,ran', '60,thickness-60mm,ran']);
   });
 
+  it('copies a weather file into the plan, so each planned file is valid where it stands', async () => {
+    const plan = join(dir, 'plan-weather');
+    expect((await runCli(['sweep', 'scenarios/kiln-warmup.yaml', '--vary', 'surface.emissivity=0.5,0.9', '--plan', plan, '--quiet'])).code).toBe(0);
+    expect(readdirSync(join(plan, 'weather'))).toEqual(['ridgeport-2026-01.csv']);
+    expect(readFileSync(join(plan, 'weather', 'ridgeport-2026-01.csv')).equals(readFileSync('scenarios/weather/ridgeport-2026-01.csv'))).toBe(true);
+    const check = await runCli(['check', join(plan, 'scenarios', 'emissivity-0.5.yaml')]);
+    expect(check.code, check.stderr).toBe(0);
+    // a plan is written once: a second plan into the same folder is refused
+    expect((await runCli(['sweep', 'scenarios/kiln-warmup.yaml', '--vary', 'surface.emissivity=0.5', '--plan', plan])).stderr).toMatch(/--plan: .* holds a plan already \(manifest\.json\); choose a new folder/);
+  });
+
   it('collect names the points whose runs are missing, and refuses a folder without a plan', async () => {
     const plan = join(dir, 'plan-unrun');
     expect((await runCli(['sweep', file, '--vary', 'surface.emissivity=0.8,0.9', '--plan', plan])).code).toBe(0);

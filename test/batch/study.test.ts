@@ -12,13 +12,13 @@ import { fileCases } from '../../src/input/scenario/cases.ts';
 import { runCasesSerially, runCases, chooseThreads, POOL_BREAK_EVEN_CASES } from '../../src/batch/pool.ts';
 import { comparisonStudy } from '../../src/batch/study.ts';
 import { comparisonArtefacts } from '../../src/batch/artefacts.ts';
-import type { CaseOutcome, RanOutcome } from '../../src/batch/runCase.ts';
+import type { CaseOutcome, RanOutcome } from '../../src/batch/outcome.ts';
 import { shortDemoFile } from '../support/shortScenario.ts';
 
 let dir: string;
 let file: string;
 let serial: CaseOutcome[];
-beforeAll(() => {
+beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'stackday-batch-'));
   file = shortDemoFile(dir, 'variants', (s) => {
     s.variants = {
@@ -27,7 +27,7 @@ beforeAll(() => {
       broken: { 'stack.layers[1].thickness': '-5 mm' },
     };
   });
-  serial = runCasesSerially(fileCases(file));
+  serial = await runCasesSerially(fileCases(file));
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

@@ -139,11 +139,15 @@ export interface SweepPoint {
   readonly overrides: readonly ScenarioOverride[];
 }
 
+/** The last key of an axis's path, e.g. `thickness` for `stack.layers[1].thickness`. */
+export function axisLeaf(axis: Pick<SweepAxis, 'path'>): string {
+  return [...axis.path].reverse().find((p): p is string => typeof p === 'string') ?? 'value';
+}
+
 /** `thickness-40mm` from the axis's last key and the value's text. */
 function pointLabel(axis: SweepAxis, v: SweptValue): string {
-  const leaf = [...axis.path].reverse().find((p): p is string => typeof p === 'string') ?? 'value';
   const value = v.text.replace(/\s+/g, '').replace(/^-/, 'minus').replace(/[^A-Za-z0-9._-]/g, '_');
-  return `${leaf}-${value}`;
+  return `${axisLeaf(axis)}-${value}`;
 }
 
 /** Every combination of the axes' values (the first axis outermost), with names made unique. */

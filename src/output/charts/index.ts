@@ -29,6 +29,13 @@ export { acidMarginMap, marginClasses, marginClassOf, type MarginClass } from '.
 export { gasAlongHeight, type GasAlongHeightOptions } from './gasAlongHeight.ts';
 export { outsideHeatFlows } from './outsideHeatFlows.ts';
 export { warmupInnerSurface } from './warmupInnerSurface.ts';
+export { overlayShell } from './overlayShell.ts';
+export { overlayInnerSurfaceTop } from './overlayInnerSurfaceTop.ts';
+export { overlayAcidMarginTop } from './overlayAcidMarginTop.ts';
+export { overlayHeatLoss } from './overlayHeatLoss.ts';
+export { OVERLAY_MAX_LINES, type OverlayCase, type OverlayOptions } from './overlayParts.ts';
+export { sweepFigure, SWEEP_FIGURES, type SweepFigure } from './sweepFigure.ts';
+export { sweepPassMap } from './sweepPassMap.ts';
 
 export interface RenderAllChartsOptions {
   /** Chart width, px (default 1000). */
