@@ -14,7 +14,7 @@
  * vitest), a worker first registers tsx's loader, then loads worker.ts.
  */
 import { Worker } from 'node:worker_threads';
-import { availableParallelism } from 'node:os';
+import { availableParallelism, loadavg } from 'node:os';
 import { createRequire } from 'node:module';
 import { pathToFileURL } from 'node:url';
 import { readFileSync } from 'node:fs';
@@ -25,18 +25,23 @@ import type { WorkerJob, WorkerReply } from './worker.ts';
 
 /**
  * Fewest cases for which the pool is used when the thread count is left to the program: below
- * this, workers' start-up and JIT warm-up cost more than they save (measured on 2 cores with the
- * demo scenario: bench/sweep.ts, see the README).
+ * this, a worker's start-up and JIT warm-up (about a second of CPU for the demo) cost more than
+ * they save. An estimate from the CPU times bench/sweep.ts measures on 2 cores (see the README).
  */
 export const POOL_BREAK_EVEN_CASES = 8;
 
 /** Called after each case with the number done and the total. */
 export type ProgressCallback = (done: number, total: number) => void;
 
-/** Threads to use for `count` cases: as asked (1 = serial), or by the break-even when `auto`. */
-export function chooseThreads(count: number, requested: number | 'auto', cores = availableParallelism()): number {
+/**
+ * Threads to use for `count` cases: as asked (1 = serial), or, when `auto`, one per core for a
+ * batch of at least POOL_BREAK_EVEN_CASES on a machine with a core to spare — not when the load
+ * average already reaches the number of cores: the other work then holds the cores (and the
+ * scheduler shares them among sessions, not threads), so a pool would only add its start-up.
+ */
+export function chooseThreads(count: number, requested: number | 'auto', cores = availableParallelism(), load = loadavg()[0]!): number {
   if (requested !== 'auto') return Math.max(1, Math.min(requested, count));
-  return count >= POOL_BREAK_EVEN_CASES && cores > 1 ? Math.min(cores, count) : 1;
+  return count >= POOL_BREAK_EVEN_CASES && cores > 1 && load < cores ? Math.min(cores, count) : 1;
 }
 
 /** Whether this module runs from the TypeScript sources (tsx, vitest) rather than from dist/. */

@@ -43,12 +43,12 @@ function spec<T>(make: () => T): T {
   }
 }
 
-/** Run a batch with a progress bar on a terminal (after a second). */
-async function runWithProgress(cases: Parameters<typeof runBatch>[0], opts: BatchCommandOptions, label: string): Promise<CaseOutcome[]> {
+/** Run a batch (on `pool` when given, else as `--threads` says) with a progress bar on a terminal (after a second). */
+async function runWithProgress(cases: Parameters<typeof runBatch>[0], opts: BatchCommandOptions, label: string, pool: CasePool | null = null): Promise<CaseOutcome[]> {
   const progress = batchProgress(!opts.quiet && !opts.json && process.stderr.isTTY === true, label);
   progress.start(cases.length);
   try {
-    return (await runBatch(cases, { threads: parseThreads(opts.threads), onProgress: progress.onProgress })).outcomes;
+    return pool ? await pool.run(cases, progress.onProgress) : (await runBatch(cases, { threads: parseThreads(opts.threads), onProgress: progress.onProgress })).outcomes;
   } finally {
     progress.stop();
   }
@@ -102,37 +102,47 @@ export interface SweepCommandOptions extends BatchCommandOptions {
   plan?: string;
 }
 
+/** Write a plan of the sweep for a batch system, and say how to run and collect it. */
+function planSweep(file: string, opts: SweepCommandOptions, plan: string, axes: readonly SweepAxis[], points: ReturnType<typeof sweepPoints>): number {
+  if (holdsPlan(plan)) throw new BadInput(`--plan: ${plan} holds a plan already (manifest.json); choose a new folder`);
+  const manifest = writePlan(plan, file, axes, points, sweepCases(file, points), VERSION);
+  const planned = manifest.points.filter((p) => p.status === 'planned').length;
+  const notRun: NotRun[] = manifest.points.filter((p) => p.status === 'invalid').map((p) => ({ scenario: p.name, status: 'invalid', problems: p.problems }));
+  reportNotRun(notRun, points.length);
+  const dir = resolve(plan);
+  if (!opts.quiet)
+    process.stdout.write(
+      [
+        `Planned ${planned} runs in ${dir} (manifest.json, ${SCENARIO_LIST}, scenarios/).`,
+        'Run them with any of:',
+        `  ${join(dir, 'run-parallel.sh')}     (GNU parallel)`,
+        `  ${join(dir, 'run-xargs.sh')}        (xargs -P)`,
+        `  cd ${dir} && sbatch slurm-array.sh   (Slurm job array)`,
+        `then: stackday collect ${dir}`,
+        ...notRunLines(notRun),
+        '',
+      ].join('\n'),
+    );
+  return notRun.length > 0 ? EXIT_SOME_NOT_RUN : EXIT_OK;
+}
+
 export async function sweepCommand(file: string, opts: SweepCommandOptions): Promise<number> {
   parseChartSize(opts.chartSize);
-  parseThreads(opts.threads);
+  const requested = parseThreads(opts.threads);
   const axes = spec(() => opts.vary.map((v) => parseVary(v)));
   const points = spec(() => sweepPoints(axes));
-  const cases = sweepCases(file, points);
-  if (opts.plan) {
-    if (holdsPlan(opts.plan)) throw new BadInput(`--plan: ${opts.plan} holds a plan already (manifest.json); choose a new folder`);
-    const manifest = writePlan(opts.plan, file, axes, points, cases, VERSION);
-    const planned = manifest.points.filter((p) => p.status === 'planned').length;
-    const notRun: NotRun[] = manifest.points.filter((p) => p.status === 'invalid').map((p) => ({ scenario: p.name, status: 'invalid', problems: p.problems }));
-    reportNotRun(notRun, points.length);
-    const dir = resolve(opts.plan);
-    if (!opts.quiet)
-      process.stdout.write(
-        [
-          `Planned ${planned} runs in ${dir} (manifest.json, ${SCENARIO_LIST}, scenarios/).`,
-          'Run them with any of:',
-          `  ${join(dir, 'run-parallel.sh')}     (GNU parallel)`,
-          `  ${join(dir, 'run-xargs.sh')}        (xargs -P)`,
-          `  cd ${dir} && sbatch slurm-array.sh   (Slurm job array)`,
-          `then: stackday collect ${dir}`,
-          ...notRunLines(notRun),
-          '',
-        ].join('\n'),
-      );
-    return notRun.length > 0 ? EXIT_SOME_NOT_RUN : EXIT_OK;
+  if (opts.plan) return planSweep(file, opts, opts.plan, axes, points);
+  // the pool starts first, so that its workers load the model while this thread validates the file
+  const threads = chooseThreads(points.length, requested);
+  const pool = threads > 1 ? new CasePool(threads) : null;
+  try {
+    const cases = sweepCases(file, points);
+    const outcomes = await runWithProgress(cases, opts, 'sweeping', pool);
+    const name = String((cases[0]?.raw as { name?: unknown } | undefined)?.name ?? 'scenario');
+    return await finishSweep(sweepStudy(axes, points, outcomes), resolve(opts.out ?? join('out', `${name}-sweep`)), opts);
+  } finally {
+    await pool?.close();
   }
-  const outcomes = await runWithProgress(cases, opts, 'sweeping');
-  const name = String((cases[0]?.raw as { name?: unknown } | undefined)?.name ?? 'scenario');
-  return finishSweep(sweepStudy(axes, points, outcomes), resolve(opts.out ?? join('out', `${name}-sweep`)), opts);
 }
 
 export async function collectCommand(dir: string, opts: BatchCommandOptions): Promise<number> {

@@ -90,11 +90,12 @@ async function expectSameFiles(a: readonly CaseOutcome[], b: readonly CaseOutcom
 }
 
 describe('chooseThreads', () => {
-  it('runs a short batch in this thread, a long one on every core, and a count asked for as asked', () => {
-    expect(chooseThreads(3, 'auto', 2)).toBe(1);
-    expect(chooseThreads(POOL_BREAK_EVEN_CASES, 'auto', 2)).toBe(2);
-    expect(chooseThreads(100, 'auto', 1)).toBe(1); // one core: nothing to gain
-    expect(chooseThreads(5, 3, 2)).toBe(3);
-    expect(chooseThreads(2, 8, 2)).toBe(2); // never more threads than cases
+  it('runs a short batch in this thread, a long one on every core of a machine with a core to spare, and a count asked for as asked', () => {
+    expect(chooseThreads(3, 'auto', 2, 0)).toBe(1);
+    expect(chooseThreads(POOL_BREAK_EVEN_CASES, 'auto', 2, 0.5)).toBe(2);
+    expect(chooseThreads(100, 'auto', 1, 0)).toBe(1); // one core: nothing to gain
+    expect(chooseThreads(100, 'auto', 2, 2.5)).toBe(1); // the cores are busy with other work
+    expect(chooseThreads(5, 3, 2, 9)).toBe(3); // asked for: as asked, whatever the load
+    expect(chooseThreads(2, 8, 2, 0)).toBe(2); // never more threads than cases
   });
 });
