@@ -17,6 +17,7 @@
  * 6. Start-up of the compiled command (bench/startup.ts).
  * 7. Memory: peak memory and time of a 365-day run of the demo (bench/memory.ts).
  * 8. A year of the demo with its typical year and plant calendar: compute, peak memory (bench/annual.ts).
+ * 9. Sweeps: where the pool of worker threads pays, and a 100-point sweep serially against the pool (bench/sweep.ts).
  *
  * It runs the compiled package (dist/, built by `npm run bench` first), as users do: the
  * development loader adds overhead of its own to every module access.
@@ -30,6 +31,7 @@ import type { RunResult } from '../dist/model/timeseries.js';
 import { benchStartup } from './startup.ts';
 import { benchMemory } from './memory.ts';
 import { benchAnnual } from './annual.ts';
+import { benchSweep } from './sweep.ts';
 
 /** Runs before timing: V8 needs about this many one-day runs before its optimised code settles. */
 const WARM_UP_RUNS = 10;
@@ -183,3 +185,5 @@ console.log('');
 benchMemory();
 console.log('');
 benchAnnual();
+console.log('');
+benchSweep();

@@ -26,6 +26,13 @@ export interface Comparison {
   readonly rule: string;
 }
 
+/** A case of a batch that did not run: its name and why (not a valid scenario, or a run that could not be computed). */
+export interface NotRun {
+  readonly scenario: string;
+  readonly status: 'invalid' | 'failed';
+  readonly problems: readonly string[];
+}
+
 export function comparisonRow(summary: Summary): ComparisonRow {
   const stresses = summary.layers.map((l) => l.stress_indicator_mpa).filter((v): v is number => v !== null);
   return {
@@ -50,10 +57,13 @@ export function compareBuildUps(summaries: readonly Summary[]): Comparison {
   return { rows, recommended: best ? best.scenario : null, rule: 'meets every limit that is set, then the least heat loss per day' };
 }
 
+/** A CSV cell: empty for a missing value, quoted when it holds a quote, a comma or a line break. */
+export const csvCell = (v: unknown): string => (v === null || v === undefined ? '' : /[",\n]/.test(String(v)) ? `"${String(v).replace(/"/g, '""')}"` : String(v));
+
 /** comparison.csv text. */
 export function comparisonCsv(c: Comparison): string {
   const head = 'scenario,build_up,all_limits_pass,failed_limits,peak_shell_c,peak_lining_c,lowest_acid_dew_margin_k,lowest_water_dew_margin_k,max_stress_indicator_mpa,heat_loss_kwh_per_day,recommended\n';
-  const cell = (v: unknown) => (v === null || v === undefined ? '' : /[",\n]/.test(String(v)) ? `"${String(v).replace(/"/g, '""')}"` : String(v));
+  const cell = csvCell;
   return (
     head +
     c.rows

@@ -7,7 +7,9 @@
  * run that could not be computed, nothing written; 3 the run completed, a limit failed and
  * --strict was given; 4 the environment failed — the output folder cannot be made or written (a
  * file in the way, no permission, read-only), the disk is full, a file-size limit — or memory ran
- * out; the results are not written.
+ * out; the results are not written; 5 a batch (compare, sweep, collect) ran and wrote its results,
+ * but some of its cases did not run (not a valid scenario, or not computable), each named with its
+ * problem.
  */
 import { CommanderError } from 'commander';
 import { ScenarioError } from '../input/scenario/errors.ts';
@@ -19,6 +21,7 @@ export const EXIT_INTERNAL_ERROR = 1;
 export const EXIT_BAD_INPUT = 2;
 export const EXIT_LIMIT_FAILED = 3;
 export const EXIT_ENVIRONMENT = 4;
+export const EXIT_SOME_NOT_RUN = 5;
 
 /** A bad command-line option (its message says which, the value found and what is expected). */
 export class BadInput extends Error {}

@@ -3,35 +3,34 @@
  * The `stackday` command: a thin layer over the library (no physics here).
  *
  * Exit codes (errors.ts): 0 the run completed (whatever the verdicts); 1 an internal error (a bug);
- * 2 bad input (scenario, weather file, options, an output folder holding files stackday did
- * not write) or a run that could not be computed — nothing is
- * written; 3 the run completed, a limit failed and --strict was given; 4 the environment failed
- * (the output folder cannot be made or written, a full disk, a file-size limit, memory).
+ * 2 bad input (scenario, weather file, options) or a run that could not be computed — nothing is
+ * written; 3 the run completed, a limit failed and --strict was given (for `size`: no value of the
+ * range meets every limit); 4 the environment failed (the output folder cannot be made or written,
+ * a full disk, a file-size limit, memory); 5 a batch ran and wrote its results but some of its
+ * cases did not run.
  */
 import { Command, Option } from 'commander';
 import { resolve, join, dirname } from 'node:path';
 import { VERSION } from './version.ts';
 import { BadInput, EXIT_OK, EXIT_LIMIT_FAILED, describeFailure } from './errors.ts';
+import { parseChartSize, parseHeights } from './options.ts';
 import { checkOutputFolder, describeWriteFailure } from '../output/fileErrors.ts';
-import { printable } from '../input/text.ts';
 import type { ScenarioOverride } from '../input/scenario/load.ts';
 
 // Everything else is imported inside the command that needs it (`await import(...)`), so `--version`
 // and `--help` load neither the scenario schema (zod), the model nor the charts (chart.js, canvas).
 
-export { EXIT_OK, EXIT_INTERNAL_ERROR, EXIT_BAD_INPUT, EXIT_LIMIT_FAILED, EXIT_ENVIRONMENT } from './errors.ts';
-
-/** Chart sizes, pixels: each side (a 4000 × 4000 chart is 64 MB of pixels). */
-const CHART_SIDE = { min: 100, max: 4000 };
+export { EXIT_OK, EXIT_INTERNAL_ERROR, EXIT_BAD_INPUT, EXIT_LIMIT_FAILED, EXIT_ENVIRONMENT, EXIT_SOME_NOT_RUN } from './errors.ts';
 
 const EXIT_CODES_HELP = `
 Exit codes:
   0  the run completed (whatever the verdicts)
   1  internal error: a bug in stackday (please report it)
   2  bad input (scenario, weather file, option) or a run that could not be computed; nothing written
-  3  the run completed, a limit failed and --strict was given
+  3  the run completed, a limit failed and --strict was given (size: no value of the range passes)
   4  the environment failed: the output folder cannot be made or written (a file in the way, no
-     permission, read-only), the disk is full, a file-size limit, or memory ran out`;
+     permission, read-only), the disk is full, a file-size limit, or memory ran out
+  5  a batch (compare, sweep, collect) wrote its results, but some of its cases did not run`;
 
 interface RunOptions {
   out?: string;
@@ -45,23 +44,6 @@ interface RunOptions {
   firingStart?: string;
   days?: string;
   accuracy?: string;
-}
-
-function parseChartSize(text: string): { width: number; height: number } {
-  const m = /^\s*(\d{1,6})\s*x\s*(\d{1,6})\s*$/i.exec(text);
-  const [width, height] = m ? [Number(m[1]), Number(m[2])] : [Number.NaN, Number.NaN];
-  if (!(width >= CHART_SIDE.min && width <= CHART_SIDE.max && height >= CHART_SIDE.min && height <= CHART_SIDE.max))
-    throw new BadInput(`--chart-size: found "${printable(text)}"; expected WIDTHxHEIGHT in pixels, each from ${CHART_SIDE.min} to ${CHART_SIDE.max}, e.g. 1200x700`);
-  return { width, height };
-}
-
-/** Heights in m from `--chart-heights`, each from 0 to the stack height `stackHeightM`. */
-function parseHeights(text: string, stackHeightM: number): number[] {
-  const parts = text.split(',').map((v) => v.trim());
-  const values = parts.map((v) => (/^[+]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(v) ? Number(v) : Number.NaN));
-  if (values.some((v) => !(v >= 0 && v <= stackHeightM)))
-    throw new BadInput(`--chart-heights: found "${printable(text)}"; expected heights in m from 0 to the stack height (${stackHeightM} m), separated by commas, e.g. 5,20,40`);
-  return values;
 }
 
 /**
@@ -181,51 +163,88 @@ export function buildProgram(): Command {
   ).action(async (file: string, opts: RunOptions) => {
     process.exitCode = await runCommand(file, opts, 'warmup');
   });
+  const threadsOption = () => new Option('--threads <n>', 'threads: auto (a pool of worker threads when the batch is long enough to pay for it), or a number (1: one after another)').default('auto');
+  const addTableOptions = (cmd: Command) =>
+    cmd
+      .option('--no-charts', 'skip the PNG charts')
+      .option('--chart-size <WxH>', 'chart size in pixels', '1000x600')
+      .option('--strict', 'exit with code 3 when no case meets every limit')
+      .option('-q, --quiet', 'print nothing but errors')
+      .option('--json', 'print the table as JSON');
+  const addBatchOptions = (cmd: Command) => addTableOptions(cmd.addOption(threadsOption()));
+  addBatchOptions(
+    program
+      .command('compare')
+      .argument('<scenarios...>', 'scenario files, one per wall build-up; a file with `variants:` adds each variant next to its base case')
+      .description('run several scenarios or variants (wall build-ups) and compare them: which meets every limit, at what heat loss')
+      .option('-o, --out <dir>', 'also write comparison.json, comparison.csv and the overlay charts into this folder'),
+  ).action(async (files: string[], opts) => {
+    const { compareCommand } = await import('./design.ts');
+    process.exitCode = await compareCommand(files, opts);
+  });
+  addBatchOptions(
+    program
+      .command('sweep')
+      .argument('<scenario>', 'scenario file (YAML or JSON)')
+      .description('vary one or two values of a scenario over a list or a range: the key figures against the values, with every limit')
+      .requiredOption('--vary <key=values>', 'a key path and its values: "stack.layers[1].thickness=20 mm..120 mm step 10 mm" or "surface.emissivity=0.3,0.6,0.9" (twice for a map)', (v: string, prev: string[] = []) => [...prev, v])
+      .option('-o, --out <dir>', 'output folder (default: out/<scenario name>-sweep/)')
+      .option('--plan <dir>', 'run nothing: write one scenario file per point, a manifest and scripts for GNU parallel, xargs and Slurm into this folder (then `stackday collect`)'),
+  ).action(async (file: string, opts) => {
+    const { sweepCommand } = await import('./design.ts');
+    process.exitCode = await sweepCommand(file, opts);
+  });
   program
-    .command('compare')
-    .argument('<scenarios...>', 'two or more scenario files, one per wall build-up')
-    .description('run several scenarios (wall build-ups) and compare them: which meets every limit, at what heat loss')
-    .option('-o, --out <dir>', 'also write comparison.json and comparison.csv into this folder')
-    .option('--strict', 'exit with code 3 when no build-up meets every limit')
-    .option('--json', 'print the comparison as JSON')
-    .action(async (files: string[], opts: { out?: string; strict?: boolean; json?: boolean }) => {
-      const [{ loadScenarioFile }, { runScenario }, { compareBuildUps, comparisonCsv }, { writeArtefactsAtomically }, { comparisonSheet }] = await Promise.all([
-        import('../input/scenario/load.ts'),
-        import('../index.ts'),
-        import('../analysis/compare.ts'),
-        import('../output/write.ts'),
-        import('../output/console.ts'),
-      ]);
-      // validate every file before running any: bad input anywhere means nothing runs and nothing is written
-      const loaded = files.map((f) => loadScenarioFile(f));
-      const outDir = opts.out === undefined ? undefined : resolve(opts.out);
-      const obstacle = outDir === undefined ? null : checkOutputFolder(outDir);
-      if (obstacle) throw obstacle;
-      const runs = loaded.map((l) => runScenario(l));
-      const comparison = compareBuildUps(runs.map((r) => r.summary));
-      if (outDir !== undefined) {
-        try {
-          writeArtefactsAtomically(outDir, [
-            { fileName: 'comparison.json', content: `${JSON.stringify(comparison, null, 2)}\n` },
-            { fileName: 'comparison.csv', content: comparisonCsv(comparison) },
-          ]);
-        } catch (e) {
-          throw describeWriteFailure(e, outDir);
-        }
-      }
-      if (opts.json) process.stdout.write(`${JSON.stringify(comparison, null, 2)}\n`);
-      else process.stdout.write(`${comparisonSheet(comparison, runs[0]!.summary.cautions).join('\n')}\n`);
-      process.exitCode = opts.strict && comparison.recommended === null ? EXIT_LIMIT_FAILED : EXIT_OK;
+    .command('size')
+    .argument('<scenario>', 'scenario file (YAML or JSON)')
+    .description('the smallest (or largest) value of one key that meets every limit, by bisection, with the run one step beyond that fails')
+    .requiredOption('--vary <key=range>', 'a key path and the range to search: "stack.layers[1].thickness=20 mm..200 mm"')
+    .option('--resolution <step>', 'step of the answer in the range\'s unit, e.g. "5 mm"')
+    .option('--largest', 'find the largest value that meets every limit (default: the smallest)')
+    .addOption(threadsOption())
+    .option('-o, --out <dir>', 'also write sizing.json into this folder')
+    .option('-q, --quiet', 'print nothing but errors')
+    .option('--json', 'print the answer as JSON')
+    .action(async (file: string, opts) => {
+      const { sizeCommand } = await import('./design.ts');
+      process.exitCode = await sizeCommand(file, opts);
     });
+  addTableOptions(
+    program
+      .command('collect')
+      .argument('<plan>', 'a folder written by `stackday sweep --plan`, after its runs')
+      .description("gather a plan's runs into the sweep's table and charts")
+      .option('-o, --out <dir>', 'output folder (default: DIR/results; the plan folder itself is never replaced)'),
+  ).action(async (dir: string, opts) => {
+    const { collectCommand } = await import('./design.ts');
+    process.exitCode = await collectCommand(dir, opts);
+  });
   program
     .command('check')
     .argument('<scenario>', 'scenario file (YAML or JSON)')
-    .description('validate a scenario file and report every problem, without running it')
+    .description('validate a scenario file (and each of its variants) and report every problem, without running it')
     .action(async (file: string) => {
-      const { loadScenarioFile } = await import('../input/scenario/load.ts');
+      const [{ loadScenarioFile }, { fileCases, validateCase }, { ScenarioError }] = await Promise.all([
+        import('../input/scenario/load.ts'),
+        import('../input/scenario/cases.ts'),
+        import('../input/scenario/errors.ts'),
+      ]);
       const loaded = loadScenarioFile(file);
       process.stdout.write(`${file}: valid scenario "${loaded.inputs.name}" (${loaded.inputs.layers.length} layers, ${loaded.inputs.stack.segments} segments)\n`);
       for (const w of loaded.warnings) process.stdout.write(`  warning: ${w}\n`);
+      const problems = fileCases(file)
+        .slice(1)
+        .flatMap((c) => {
+          try {
+            validateCase(c);
+            process.stdout.write(`  variant "${c.name}": valid\n`);
+            return [];
+          } catch (e) {
+            if (!(e instanceof ScenarioError)) throw e;
+            return e.problems;
+          }
+        });
+      if (problems.length > 0) throw new ScenarioError(problems, file);
     });
   program
     .command('schema')

@@ -1,6 +1,6 @@
 /**
  * The folders show the layers, and no import runs backwards up the chain
- *   physics, solver → model → input → analysis → output → library entry → cli
+ *   physics, solver → model → input → analysis → output → library entry → batch → cli
  * (a module may import from its own layer or from layers before it; physics and solver are
  * independent foundations and import neither each other nor anything above them). No two folders
  * import each other. Type-only imports count: a type is a dependency too.
@@ -13,7 +13,7 @@ import { dirname, join, relative, resolve, sep } from 'node:path';
 const SRC = resolve(__dirname, '../../src');
 
 /** Rank of each top-level layer; equal ranks in different layers may not import each other. */
-const LAYER_RANK: Record<string, number> = { physics: 0, solver: 0, model: 1, input: 2, analysis: 3, output: 4, 'index.ts': 5, cli: 6 };
+const LAYER_RANK: Record<string, number> = { physics: 0, solver: 0, model: 1, input: 2, analysis: 3, output: 4, 'index.ts': 5, batch: 5.5, cli: 6 };
 
 function walk(dir: string): string[] {
   return readdirSync(dir).flatMap((f) => {

@@ -508,6 +508,23 @@ const limits = z.strictObject({
     .meta({ description: 'Annual runs: thermal cycles (rainflow, ASTM E1049) of the temperature difference across each layer and the whole wall with a range above `range`, counted; with `count`, a limit on them per year.' }),
 });
 
+/**
+ * Variants of the scenario in the same file, by name: each a mapping of overrides (a section merged
+ * key by key, a list or a value replaced, a key path such as `stack.layers[1].thickness` setting one
+ * value, null removing a key). Each variant is validated as its own scenario by validate.ts.
+ */
+const variants = z
+  .record(z.string(), z.unknown())
+  .meta({ description: 'Named variants of this scenario (for `stackday compare`): each a mapping of the keys it changes, e.g. `stack.layers[1].thickness: 100 mm`.' })
+  .check((ctx) => {
+    for (const [name, changes] of Object.entries(ctx.value)) {
+      if (!/^[A-Za-z0-9][A-Za-z0-9._-]*$/.test(name))
+        ctx.issues.push({ code: 'custom', input: name, path: [name], message: `found the name ${JSON.stringify(name)}; expected a variant name of letters, digits, ".", "_" or "-", starting with a letter or digit` });
+      else if (changes === null || typeof changes !== 'object' || Array.isArray(changes))
+        ctx.issues.push({ code: 'custom', input: changes, path: [name], message: 'expected a mapping of the keys the variant changes' });
+    }
+  });
+
 /** Names become folder names: short, and only characters every file system takes. */
 const NAME_WORDING = `expected a name of 1 to ${LIMITS.nameLength} letters, digits, ".", "_" or "-", starting with a letter or digit (it names the output folder)`;
 
@@ -531,6 +548,7 @@ export const scenarioSchema = z
     run: run.prefault({}),
     output: output.prefault({}),
     limits: limits.prefault({}),
+    variants: variants.optional(),
   })
   .meta({ title: 'stackday scenario', description: 'A stack, its wall build-up, the site, the weather, the firing and the run.' });
 

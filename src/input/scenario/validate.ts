@@ -47,12 +47,19 @@ export interface LoadedScenario {
 /**
  * A value set in the scenario before validation, e.g. `--days 5` → `{ path: ['run', 'days'],
  * value: 5, option: '--days' }`. Messages about that key name the option as well as the path.
+ * An undefined value removes the key.
  */
 export interface ScenarioOverride {
   readonly path: readonly (string | number)[];
   readonly value: unknown;
   /** The command-line option that set it, for messages. */
   readonly option?: string;
+  /**
+   * Where the value was written, when not at the top of the scenario: a variant's
+   * `['variants', 'thick-wool']`. Messages about the key, or anything under it, carry this prefix:
+   * `variants.thick-wool.stack.layers[1].thickness: found …`.
+   */
+  readonly prefix?: readonly (string | number)[];
 }
 
 export interface ValidateOptions {
@@ -65,16 +72,18 @@ export interface ValidateOptions {
   readonly written?: WrittenLookup;
 }
 
-/** A deep copy of `raw` with every override set (missing sections are created). */
-function withOverrides(raw: unknown, overrides: readonly ScenarioOverride[]): unknown {
+/** A deep copy of `raw` with every override set (missing sections are created; an undefined value removes the key). */
+export function withOverrides(raw: unknown, overrides: readonly ScenarioOverride[]): unknown {
   if (overrides.length === 0) return raw;
   const copy: unknown = raw !== null && typeof raw === 'object' ? structuredClone(raw) : raw;
   if (copy === null || typeof copy !== 'object') return copy;
   for (const o of overrides) {
     let node = copy as Record<string | number, unknown>;
     o.path.forEach((key, i) => {
-      if (i === o.path.length - 1) node[key] = o.value;
-      else {
+      if (i === o.path.length - 1) {
+        if (o.value === undefined) delete node[key];
+        else node[key] = o.value;
+      } else {
         const next = node[key];
         if (next === null || typeof next !== 'object') node[key] = {};
         node = node[key] as Record<string | number, unknown>;
@@ -84,12 +93,21 @@ function withOverrides(raw: unknown, overrides: readonly ScenarioOverride[]): un
   return copy;
 }
 
-/** Problem lines about an overridden key name the option too: `--days (run.days): found …`. */
+/**
+ * Problem lines about an overridden key name the option too (`--days (run.days): found …`), and
+ * lines about a key written under a prefix, or anything below it, carry the prefix
+ * (`variants.thick-wool.stack.layers[1].thickness: found …`). The most specific override wins.
+ */
 function nameOverrides(problems: readonly string[], overrides: readonly ScenarioOverride[]): string[] {
+  const named = overrides.filter((o) => o.option || o.prefix).sort((a, b) => b.path.length - a.path.length);
   return problems.map((line) => {
-    for (const o of overrides) {
+    for (const o of named) {
       const key = formatPath(o.path);
-      if (o.option && line.startsWith(`${key}:`)) return `${o.option} (${key})${line.slice(key.length)}`;
+      if (!line.startsWith(key)) continue;
+      const next = line.charAt(key.length);
+      const shown = o.prefix ? formatPath([...o.prefix, ...o.path]) : key;
+      if (o.option && next === ':') return `${o.option} (${shown})${line.slice(key.length)}`;
+      if (o.prefix && (next === ':' || next === '.' || next === '[')) return `${shown}${line.slice(key.length)}`;
     }
     return line;
   });

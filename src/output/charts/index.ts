@@ -41,6 +41,13 @@ export { monthlyDewHours } from './monthlyDewHours.ts';
 export { monthlyHeatLoss } from './monthlyHeatLoss.ts';
 export { cycleHistogram } from './cycleHistogram.ts';
 export { monthLabel } from './bars.ts';
+export { overlayShell } from './overlayShell.ts';
+export { overlayInnerSurfaceTop } from './overlayInnerSurfaceTop.ts';
+export { overlayAcidMarginTop } from './overlayAcidMarginTop.ts';
+export { overlayHeatLoss } from './overlayHeatLoss.ts';
+export { OVERLAY_MAX_LINES, type OverlayCase, type OverlayOptions } from './overlayParts.ts';
+export { sweepFigure, SWEEP_FIGURES, type SweepFigure } from './sweepFigure.ts';
+export { sweepPassMap } from './sweepPassMap.ts';
 
 export interface RenderAllChartsOptions {
   /** Chart width, px (default 1000). */

@@ -120,3 +120,23 @@ export const ANNUAL_LOOKS = {
   heatLoss: { fill: LOOK.gasToWall.color, border: INK },
   monthLine: { color: 'rgba(31,35,40,0.55)', dash: [4, 3] },
 } as const;
+
+/**
+ * Looks of the cases overlaid in one chart (variants, build-ups): a qualitative palette of eight
+ * colours safe for colour-blind readers (Okabe and Ito, "Color Universal Design", 2002), each with
+ * its own dash pattern and marker (the palette's yellow darkened to read on white); beyond eight, the
+ * colours repeat with other dash and marker pairs.
+ */
+const CASE_COLORS: readonly string[] = ['#0072b2', '#d55e00', '#009e73', '#cc79a7', '#e69f00', '#56b4e9', '#000000', '#8a7a00'];
+const CASE_POINTS: readonly PointStyle[] = ['circle', 'triangle', 'rect', 'rectRot', 'star', 'crossRot', 'cross', 'rectRounded'];
+export function caseLooks(n: number): LineLook[] {
+  return Array.from({ length: n }, (_, j) => ({
+    color: CASE_COLORS[j % CASE_COLORS.length]!,
+    dash: RAMP_DASHES[(j + Math.floor(j / CASE_COLORS.length)) % RAMP_DASHES.length]!,
+    point: CASE_POINTS[(j + 3 * Math.floor(j / CASE_COLORS.length)) % CASE_POINTS.length]!,
+  }));
+}
+
+/** Fills of a verdict in bar charts and pass/fail maps: lightness differs as well as hue, so they read in greyscale. */
+export const VERDICT_COLORS = { pass: '#2f6d9f', fail: '#e8a09a', notRun: '#d9d9d9' } as const;
+export const VERDICT_BORDERS = { pass: '#173a57', fail: '#8c1b1b', notRun: '#7a7a7a' } as const;

@@ -194,11 +194,11 @@ export function boundsWithLimits(dataLo: number, dataHi: number, limits: readonl
   return { ...niceBounds(lo - pad, hi + pad), onScale };
 }
 
-/** The limit lines across [x0, x1], each labelled with its value and whether it is off the scale. */
-export function limitDatasets(limits: readonly Limit[], x0: number, x1: number, bounds: { onScale: (l: Limit) => boolean }, f: Typography): ChartDataset<'line', Point[]>[] {
+/** The limit lines across [x0, x1], each labelled with its value (in `unit`, °C unless given) and whether it is off the scale. */
+export function limitDatasets(limits: readonly Limit[], x0: number, x1: number, bounds: { onScale: (l: Limit) => boolean }, f: Typography, unit = '°C'): ChartDataset<'line', Point[]>[] {
   return limits.map((l) => {
     const on = bounds.onScale(l);
-    return levelDataset(`${l.label} ${fixed(l.valueC)} °C${on ? '' : ' (off scale)'}`, x0, x1, l.valueC, l.look, f);
+    return levelDataset(`${l.label} ${fixed(l.valueC)} ${unit}${on ? '' : ' (off scale)'}`, x0, x1, l.valueC, l.look, f);
   });
 }
 
