@@ -23,6 +23,13 @@
  * by the number of open reversals, not by the length of the series — and hands each cycle to a
  * callback as soon as it closes. {@link makeRangeHistogram} bins cycles by range as they come.
  *
+ * A gate (hysteresis filter, common practice in fatigue cycle counting; not part of E1049) may be
+ * set on the streaming counter: a reversal is taken only once the history has moved back from the
+ * pending extreme by at least the gate, so wiggles smaller than the gate (numerical noise, a
+ * quantity that hardly moves) count as nothing instead of as many tiny cycles. The largest ranges
+ * are unchanged by it; every range below the gate, and only those, can disappear. Gate 0 is the
+ * plain E1049 counting.
+ *
  * Units: whatever the values carry (e.g. K for a temperature difference); ranges and means in the
  * same unit. A histogram of ranges is an input to a fatigue judgement, not a judgement itself.
  */
@@ -146,8 +153,13 @@ export interface RainflowCounter {
  * A streaming rainflow counter: the same counting as {@link rainflowCycles}, with the turning-point
  * filter run on the fly and the residue kept on a stack; `onCycle` receives each cycle when it is
  * counted (half cycles of the residue on `close`). Memory: the stack of open reversals only.
+ * `options.gate` (≥ 0, unit of the values; default 0): the hysteresis gate of the module note.
  */
-export function makeRainflowCounter(onCycle: (c: RainflowCycle) => void): RainflowCounter {
+export function makeRainflowCounter(onCycle: (c: RainflowCycle) => void, options: { readonly gate?: number } = {}): RainflowCounter {
+  const gate = options.gate ?? 0;
+  if (!(gate >= 0 && Number.isFinite(gate))) throw new RangeError(`rainflow: gate ${gate} must be a finite number ≥ 0`);
+  // a move of `d` away from the reference counts as a move (plain counting: any change)
+  const moves = (d: number): boolean => (gate > 0 ? d >= gate : d > 0);
   const stackV: number[] = [];
   const stackI: number[] = [];
   let samples = 0;
@@ -192,7 +204,7 @@ export function makeRainflowCounter(onCycle: (c: RainflowCycle) => void): Rainfl
       }
       if (direction === 0) {
         const last = stackV[stackV.length - 1];
-        if (value === last) return;
+        if (!moves(Math.abs(value - last))) return;
         pendingV = value;
         pendingI = i;
         direction = value > last ? 1 : -1;
@@ -201,7 +213,7 @@ export function makeRainflowCounter(onCycle: (c: RainflowCycle) => void): Rainfl
       if ((value - pendingV) * direction > 0) {
         pendingV = value; // the rise (or fall) goes on
         pendingI = i;
-      } else if (value !== pendingV) {
+      } else if (moves((pendingV - value) * direction)) {
         reversal(pendingV, pendingI); // the pending extreme was a peak (valley)
         pendingV = value;
         pendingI = i;

@@ -211,6 +211,8 @@ export interface AnnualSummary
     readonly method: string;
     /** The temperature differences were sampled at every output instant, this many minutes apart. */
     readonly sampled_every_min: number;
+    /** Reversals smaller than this were filtered out before counting (hysteresis gate), K. */
+    readonly gate_k: number;
     /** Range above which cycles are counted separately, K (limits.cycles_above.range; null when not set). */
     readonly threshold_k: number | null;
     /** The whole wall first, then each layer inside → outside. */

@@ -10,6 +10,7 @@ import type { ModelInputs } from './inputs.ts';
 import type { SegmentDiagnostics, StackGeometry } from './system.ts';
 import { CORRELATIONS_IN_USE as USE, gapConvectionRangeInputs } from './correlations.ts';
 
+const place = { t: 0, heightM: 0 };
 const gapInputs: GapConvectionInputs = { rayleighGap: 0, pr: 0, aspectRatio: 0, innerDiameter: 0, outerDiameter: 0 };
 
 /** What the range checks need of the assembled model. */
@@ -26,7 +27,8 @@ export function checkCorrelationRanges(ctx: RangeCheckContext, t: number, y: Flo
   const { inputs, mesh, geometry } = ctx;
   const n = mesh.nodeCount;
   for (let s = 0; s < geometry.segments; s++) {
-    const place = { t, heightM: geometry.midHeight[s]! };
+    place.t = t; // (one object for every note: the tally copies the place it keeps)
+    place.heightM = geometry.midHeight[s]!;
     if (inputs.outside.filmCoefficient === undefined) {
       const pr = diag.prandtlOutside[s]!;
       const re = diag.reynoldsOutside[s]!;

@@ -168,7 +168,7 @@ function annualLines(a: AnnualSummary): string[] {
     ).map((l) => `  ${l}`),
   );
   const t = a.cycles.threshold_k;
-  lines.push(`  thermal cycles (rainflow, ASTM E1049; ΔT sampled every ${num(a.cycles.sampled_every_min, 0)} min; at the height with the most${t === null ? ' (largest range)' : ''})`);
+  lines.push(`  thermal cycles (rainflow, ASTM E1049; ΔT sampled every ${num(a.cycles.sampled_every_min, 0)} min, reversals under ${num(a.cycles.gate_k, 1)} K left out; at the height with the most${t === null ? ' (largest range)' : ''})`);
   lines.push(
     ...table(
       [

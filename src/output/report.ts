@@ -269,7 +269,7 @@ ${table(['Height (m)', ...(acid ? ['Below the acid dew point (h)'] : []), 'Below
 <h3>Month by month (hours at the top)</h3>
 ${table(['Month', 'Days', ...(acid ? ['Below acid dew (h)'] : []), 'Below water dew (h)', 'Heat lost (MWh)', 'Shell (°C)', 'Lining (°C)', 'Inner surface min (°C)'], months)}
 <h3>Thermal cycles</h3>
-<p class="note">Rainflow counting (ASTM E1049) of the temperature difference across the whole wall and across each layer, sampled every ${num(a.cycles.sampled_every_min, 0)} min (peaks between instants are missed); each row at the height with the most cycles${t === null ? ' (the largest range)' : ` above ${num(t, 0)} K`}. A histogram of ranges is the input to a fatigue judgement, not a judgement itself. Every height and bin: cycles.csv.</p>
+<p class="note">Rainflow counting (ASTM E1049) of the temperature difference across the whole wall and across each layer, sampled every ${num(a.cycles.sampled_every_min, 0)} min (peaks between instants are missed), reversals under ${num(a.cycles.gate_k, 1)} K left out; each row at the height with the most cycles${t === null ? ' (the largest range)' : ` above ${num(t, 0)} K`}. A histogram of ranges is the input to a fatigue judgement, not a judgement itself. Every height and bin: cycles.csv.</p>
 ${table(['Across', 'Height (m)', 'Cycles', ...(t === null ? [] : [`Above ${num(t, 0)} K`]), 'Largest range (K)', 'Ranges (cycles)'], cycles)}
 </section>`;
 }

@@ -188,3 +188,42 @@ describe('rainflow counting: properties on random series', () => {
     expect(() => makeRangeHistogram({ binWidth: 0 })).toThrow(/bin width 0/);
   });
 });
+
+describe('the hysteresis gate of the streaming counter (common practice in fatigue cycle counting)', () => {
+  const count = (series: number[], gate: number) => {
+    const cycles: RainflowCycle[] = [];
+    const counter = makeRainflowCounter((c) => cycles.push(c), { gate });
+    for (const v of series) counter.push(v);
+    counter.close();
+    return cycles;
+  };
+
+  it('gate 0 is the plain E1049 counting (ASTM E1049 Fig. 6 history)', () => {
+    const fig6 = [-2, 1, -3, 5, -1, 3, -4, 4, -2];
+    expect(count(fig6, 0)).toEqual(rainflowCycles(fig6));
+  });
+
+  it('drops wiggles under the gate and keeps the large cycles', () => {
+    // five periods of a ±5 sine (steps of at most 0.031 per sample) with a ±0.02 alternating wiggle on every sample
+    const clean = Array.from({ length: 5000 }, (_, i) => 5 * Math.sin((2 * Math.PI * i) / 1000));
+    const noisy = clean.map((v, i) => v + (i % 2 ? 0.02 : -0.02));
+    const plain = count(noisy, 0);
+    const gated = count(noisy, 0.1);
+    expect(plain.filter((c) => c.range < 0.1).length).toBeGreaterThan(100);
+    expect(gated.every((c) => c.range >= 0.1)).toBe(true);
+    // the large cycles: 4 full cycles of range ≈ 10 and the half cycles at the ends (as the clean sine gives)
+    const big = (cs: RainflowCycle[]) => cs.filter((c) => c.range > 9).reduce((s, c) => s + c.count, 0);
+    expect(big(gated)).toBe(big(count(clean, 0)));
+    expect(big(gated)).toBe(big(plain));
+  });
+
+  it('a difference that never moves by the gate counts nothing', () => {
+    const r = random(11);
+    expect(count(Array.from({ length: 1000 }, () => 0.04 * r()), 0.1).reduce((s, c) => s + c.count, 0)).toBe(0);
+  });
+
+  it('rejects a negative or non-finite gate', () => {
+    expect(() => makeRainflowCounter(() => undefined, { gate: -1 })).toThrow(/gate -1/);
+    expect(() => makeRainflowCounter(() => undefined, { gate: Number.NaN })).toThrow(/gate NaN/);
+  });
+});

@@ -12,7 +12,7 @@ import type { AnnualSummary, CyclesAtHeight, HeightHours, MonthFigures, Verdict,
 import { round } from '../rounding.ts';
 import type { AnnualParts } from './recorder.ts';
 import type { SecondsBelow } from './dewHours.ts';
-import { governs, regroup, reportBinWidth, type ColumnCycles } from './cycles.ts';
+import { CYCLE_GATE_K, governs, regroup, reportBinWidth, type ColumnCycles } from './cycles.ts';
 
 const J_PER_KWH = 3.6e6;
 
@@ -187,8 +187,9 @@ export function annualSummary(parts: AnnualParts, energyByDay: readonly EnergyAc
     min_inner_surface_height_m: at(x.minInner.segment),
     months: monthsBetween(annual.firstDay, annual.lastDay).map((m) => monthFigures(m, parts, energyByDay)),
     cycles: {
-      method: 'rainflow counting after ASTM E1049-85 (2011) § 5.4.4, the residue as half cycles; full cycles count 1, half cycles ½',
+      method: `rainflow counting after ASTM E1049-85 (2011) § 5.4.4, the residue as half cycles; full cycles count 1, half cycles ½; reversals under ${CYCLE_GATE_K} K filtered out first (hysteresis gate)`,
       sampled_every_min: round(inputs.run.outputInterval / 60, 2),
+      gate_k: CYCLE_GATE_K,
       threshold_k: threshold === null ? null : round(threshold, 2),
       across,
     },

@@ -329,28 +329,98 @@ export interface EvaluationPlace {
   readonly heightM: number;
 }
 
-/** Classify one evaluation of `name` against its published range and its accepted extrapolations. */
-export function rangeStatus<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>): RangeStatus {
-  const e = looseEntry(name);
-  const values = inputs as Readonly<Record<string, number>>;
-  let accepted: RangeStatus | null = null;
+/**
+ * One evaluation's classification, without messages (the tally checks every reported point and
+ * builds a message only for the case it keeps): 0 inside, 1 accepted, 2 outside.
+ */
+interface Classification {
+  kind: 0 | 1 | 2;
+  /** The input concerned (accepted or outside a range), or the failed condition's label. */
+  key: string;
+  side: 'above' | 'below';
+  value: number;
+  bound: number;
+  /** The bounds of the range the input left (NaN for a condition or a missing number). */
+  lo: number;
+  hi: number;
+  reason: string;
+  /** How far beyond, relative to the bound (Infinity for a condition or a missing number). */
+  excess: number;
+  /** 'range', 'nan' or 'condition' (for the outside message). */
+  cause: 'range' | 'nan' | 'condition';
+}
+
+function classifyInto(e: CorrelationEntry<string>, values: Readonly<Record<string, number>>, c: Classification): Classification {
+  c.kind = 0;
+  let acceptedSeen = false;
   for (const key of e.inputs) {
     const v = values[key];
-    if (typeof v !== 'number' || Number.isNaN(v)) return { kind: 'outside', what: `${key} is not a number`, excess: Infinity };
+    if (typeof v !== 'number' || Number.isNaN(v)) {
+      c.kind = 2;
+      c.key = key;
+      c.cause = 'nan';
+      c.excess = Infinity;
+      return c;
+    }
     const range = e.ranges[key];
     if (!range || (v >= range[0] && v <= range[1])) continue;
     const side = v < range[0] ? 'below' : 'above';
     const bound = side === 'below' ? range[0] : range[1];
     const ok = e.accepted?.find((a) => a.input === key && a.side === side);
     if (ok) {
-      accepted ??= { kind: 'accepted', input: key, side, value: v, bound, reason: ok.reason };
+      if (!acceptedSeen) {
+        acceptedSeen = true;
+        c.key = key;
+        c.side = side;
+        c.value = v;
+        c.bound = bound;
+        c.reason = ok.reason;
+      }
       continue;
     }
-    const excess = bound === 0 ? Math.abs(v) : Math.abs(v - bound) / Math.abs(bound);
-    return { kind: 'outside', what: `${key} = ${formatNumber(v)} ${side} its published range [${formatNumber(range[0])}, ${formatNumber(range[1])}]`, excess };
+    c.kind = 2;
+    c.key = key;
+    c.side = side;
+    c.value = v;
+    c.lo = range[0];
+    c.hi = range[1];
+    c.cause = 'range';
+    c.excess = bound === 0 ? Math.abs(v) : Math.abs(v - bound) / Math.abs(bound);
+    return c;
   }
-  for (const c of e.constraints) if (!c.holds(values)) return { kind: 'outside', what: `violates ${c.label}`, excess: Infinity };
-  return accepted ?? INSIDE;
+  for (const k of e.constraints)
+    if (!k.holds(values)) {
+      c.kind = 2;
+      c.key = k.label;
+      c.cause = 'condition';
+      c.excess = Infinity;
+      return c;
+    }
+  if (acceptedSeen) c.kind = 1;
+  return c;
+}
+
+function emptyClassification(): Classification {
+  return { kind: 0, key: '', side: 'above', value: Number.NaN, bound: Number.NaN, lo: Number.NaN, hi: Number.NaN, reason: '', excess: 0, cause: 'range' };
+}
+
+/** The message of an outside classification. */
+function outsideWhat(c: Classification): string {
+  if (c.cause === 'nan') return `${c.key} is not a number`;
+  if (c.cause === 'condition') return `violates ${c.key}`;
+  return `${c.key} = ${formatNumber(c.value)} ${c.side} its published range [${formatNumber(c.lo)}, ${formatNumber(c.hi)}]`;
+}
+
+function acceptedStatus(c: Classification): Extract<RangeStatus, { kind: 'accepted' }> {
+  return { kind: 'accepted', input: c.key, side: c.side, value: c.value, bound: c.bound, reason: c.reason };
+}
+
+/** Classify one evaluation of `name` against its published range and its accepted extrapolations. */
+export function rangeStatus<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>): RangeStatus {
+  const c = classifyInto(looseEntry(name), inputs as Readonly<Record<string, number>>, emptyClassification());
+  if (c.kind === 0) return INSIDE;
+  if (c.kind === 1) return acceptedStatus(c);
+  return { kind: 'outside', what: outsideWhat(c), excess: c.excess };
 }
 
 interface TallyEntry {
@@ -371,27 +441,29 @@ interface TallyEntry {
  */
 export class CorrelationRangeTally {
   private readonly seen = new Map<CorrelationName, TallyEntry>();
+  private readonly scratch = emptyClassification();
 
   /** Check one evaluation of `name` with these inputs, made at `place`. */
   note<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>, place: EvaluationPlace = { t: Number.NaN, heightM: Number.NaN }): void {
-    const status = rangeStatus(name, inputs);
+    // (every reported point of every segment comes here: messages are built only for what is kept)
+    const status = classifyInto(looseEntry(name), inputs as Readonly<Record<string, number>>, this.scratch);
     let v = this.seen.get(name);
     if (!v) {
       v = { checked: 0, accepted: 0, outside: 0, acceptedExample: null, farthestAccepted: Number.NaN, worst: null };
       this.seen.set(name, v);
     }
     v.checked++;
-    if (status.kind === 'accepted') {
+    if (status.kind === 1) {
       v.accepted++;
       if (!v.acceptedExample) {
-        v.acceptedExample = status;
+        v.acceptedExample = acceptedStatus(status);
         v.farthestAccepted = status.value;
-      } else if (status.input === v.acceptedExample.input && status.side === v.acceptedExample.side) {
+      } else if (status.key === v.acceptedExample.input && status.side === v.acceptedExample.side) {
         v.farthestAccepted = status.side === 'above' ? Math.max(v.farthestAccepted, status.value) : Math.min(v.farthestAccepted, status.value);
       }
-    } else if (status.kind === 'outside') {
+    } else if (status.kind === 2) {
       v.outside++;
-      if (!v.worst || status.excess > v.worst.excess) v.worst = { what: status.what, excess: status.excess, place };
+      if (!v.worst || status.excess > v.worst.excess) v.worst = { what: outsideWhat(status), excess: status.excess, place: { t: place.t, heightM: place.heightM } };
     }
   }
 
@@ -409,7 +481,7 @@ export class CorrelationRangeTally {
       if (v.accepted === 0 || !a) continue;
       const e = looseEntry(name);
       out.push(
-        `${e.title} is used ${a.side} its published range (${a.input} ${a.side === 'above' ? '>' : '<'} ${formatNumber(a.bound)}, up to ${formatNumber(v.farthestAccepted)}) at ${share(v.accepted, v.checked)} of the reported points: accepted because ${a.reason}.`,
+        `${e.title} is used ${a.side} its published range (${a.input} ${a.side === 'above' ? '>' : '<'} ${formatNumber(a.bound)}, up to ${formatNumber(v.farthestAccepted)}) at ${share(v.accepted, v.checked)} of the points checked: accepted because ${a.reason}.`,
       );
     }
     return out;
@@ -422,7 +494,7 @@ export class CorrelationRangeTally {
       if (v.outside === 0 || !v.worst) continue;
       const e = looseEntry(name);
       const by = Number.isFinite(v.worst.excess) ? ` (by ${formatPercent(v.worst.excess)})` : '';
-      out.push(`${e.title}: ${v.worst.what}${by} at ${describePlace(v.worst.place)}; beyond its range at ${share(v.outside, v.checked)} of the reported points, value extrapolated (${e.source})`);
+      out.push(`${e.title}: ${v.worst.what}${by} at ${describePlace(v.worst.place)}; beyond its range at ${share(v.outside, v.checked)} of the points checked, value extrapolated (${e.source})`);
     }
     return out;
   }

@@ -142,7 +142,7 @@ describe('extrapolation: accepted, or warned with how far and where', () => {
     for (let i = 0; i < 10; i++) tally.note('nuVerticalPlateChurchillChu', { ra: 1e13 * (i + 1), pr: 0.7 }, { t: 0, heightM: 5 });
     expect(tally.warnings()).toEqual([]);
     const [line] = tally.assumptions();
-    expect(line).toMatch(/Churchill–Chu \(1975\) is used above its published range \(ra > 1\.00e\+12, up to 1\.00e\+14\) at 100 % of the reported points: accepted because/);
+    expect(line).toMatch(/Churchill–Chu \(1975\) is used above its published range \(ra > 1\.00e\+12, up to 1\.00e\+14\) at 100 % of the points checked: accepted because/);
   });
 
   it('an unjustified extrapolation is a warning naming the worst value, by how much, where and how often', () => {
@@ -152,7 +152,7 @@ describe('extrapolation: accepted, or warned with how far and where', () => {
     tally.note('nuPipeGnielinski', { re: 2700, pr: 0.7 }, { t: 7200, heightM: 4 }); // 10 % below
     const warnings = tally.warnings((p) => `${p.heightM} m, t = ${p.t} s`);
     expect(warnings).toHaveLength(1);
-    expect(warnings[0]).toMatch(/Gnielinski \(1976\): re = 2000 below its published range \[3000, 5\.00e\+6\] \(by 33 %\) at 2\.5 m, t = 3600 s; beyond its range at 67 % of the reported points/);
+    expect(warnings[0]).toMatch(/Gnielinski \(1976\): re = 2000 below its published range \[3000, 5\.00e\+6\] \(by 33 %\) at 2\.5 m, t = 3600 s; beyond its range at 67 % of the points checked/);
     expect(tally.assumptions()).toEqual([]);
   });
 
