@@ -2,7 +2,7 @@
  * One typed table of the heat-transfer correlations: name → function, inputs, validity ranges,
  * description and source. The model selects the correlation for each of its roles by name here
  * (model/correlations.ts; never a hand-kept if/else chain), and every evaluation at a reported
- * instant is range-checked through `CorrelationRangeTally` (a warning for the run summary, not an
+ * instant (at most one every 10 min, model/recorder.ts) is range-checked through `CorrelationRangeTally` (a warning for the run summary, not an
  * exception). The model descriptions in the README and the report are generated from the entries
  * (`describeCorrelation`).
  */
@@ -330,7 +330,7 @@ export interface EvaluationPlace {
 }
 
 /**
- * One evaluation's classification, without messages (the tally checks every reported point and
+ * One evaluation's classification, without messages (the tally sees every instant checked and
  * builds a message only for the case it keeps): 0 inside, 1 accepted, 2 outside.
  */
 interface Classification {
@@ -445,7 +445,7 @@ export class CorrelationRangeTally {
 
   /** Check one evaluation of `name` with these inputs, made at `place`. */
   note<N extends CorrelationName>(name: N, inputs: CorrelationInputs<N>, place: EvaluationPlace = { t: Number.NaN, heightM: Number.NaN }): void {
-    // (every reported point of every segment comes here: messages are built only for what is kept)
+    // (every checked instant of every segment comes here: messages are built only for what is kept)
     const status = classifyInto(looseEntry(name), inputs as Readonly<Record<string, number>>, this.scratch);
     let v = this.seen.get(name);
     if (!v) {
