@@ -208,15 +208,15 @@ export class StackWallSystem implements OdeSystem {
     const { conductance, tables, linkTable, capTableA, capTableB } = this;
     const n = this.n;
     for (let i = 0; i < n - 1; i++) {
-      const ta = y[o + i]!;
-      const tb = y[o + i + 1]!;
+      const tIn = y[o + i]!;
+      const tOut = y[o + i + 1]!;
       const kind = linkKind[i];
       conductance[i] =
         kind === LINK_CONDUCTION
-          ? linkGeometry[i]! * tables.at(linkTable[i]!, 0.5 * (ta + tb))
+          ? linkGeometry[i]! * tables.at(linkTable[i]!, 0.5 * (tIn + tOut))
           : kind === LINK_CONTACT
             ? linkGeometry[i]!
-            : gapConductancePerMetre(linkGap[i]!, ta, tb, gapConvectionRatio, this.sitePressurePa, this.geometry.segmentLength);
+            : gapConductancePerMetre(linkGap[i]!, tIn, tOut, gapConvectionRatio, this.sitePressurePa, this.geometry.segmentLength);
     }
     for (let i = 0; i < n; i++) {
       const t = y[o + i]!;

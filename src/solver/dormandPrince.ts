@@ -6,7 +6,7 @@
  *
  * Source: J. R. Dormand & P. J. Prince (1980), "A family of embedded Runge–Kutta formulae",
  * J. Comput. Appl. Math. 6:19–26 (the coefficients, as also printed in Hairer, Nørsett & Wanner,
- * Solving ODEs I, 2nd ed. 1993, Sect. II.5; transcribed from memory and verified by the
+ * Solving ODEs I, 2nd ed. 1993, Sect. II.5; written from memory and verified by the
  * order-of-accuracy and reference-solver tests).
  *
  * Step control: h_new = h · min(5, max(0.2, 0.9 · err^(−1/5))), no growth right after a rejection;

@@ -103,7 +103,7 @@ export function isSlenderVerticalCylinder(
  * - Source: C. O. Popiel, J. Wojtkowiak, K. Bober, "Laminar free convective heat transfer from
  *   isothermal vertical slender cylinder", Exp. Thermal Fluid Sci. 32 (2007) 607–613,
  *   doi:10.1016/j.expthermflusci.2007.07.003; reviewed in C. O. Popiel, Heat Transfer Eng. 29
- *   (2008) 521–536. Coefficients as transcribed in the CalebBell/ht library documentation, which
+ *   (2008) 521–536. Coefficients as given in the CalebBell/ht library documentation, which
  *   notes that the 2008 review misprints 32^0.5 as 32²; not checked against the paper here.
  *
  * Example: Pr = 0.7, Gr_L = 10⁸, L/D = 100 → B = 0.29384, C = 0.90883,

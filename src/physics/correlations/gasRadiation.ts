@@ -34,8 +34,8 @@ export interface WsggModel {
 
 /**
  * Smith, Shen & Friedman (1982), three grey gases plus a clear gas, fitted to the exponential
- * wide-band model. Coefficients b₁…b₄ as published (recalled, and identical in a third-party
- * transcription that was compared digit by digit).
+ * wide-band model. Coefficients b₁…b₄ as published (recalled, and identical to a secondary
+ * source's table, compared digit by digit).
  */
 export const WSGG_SMITH_1982: WsggModel = {
   ratio1: {
@@ -68,8 +68,8 @@ export const WSGG_SMITH_1982: WsggModel = {
 
 /**
  * Dorigon, Duciak, Brittes, Cassol, Galarça, França (2013), four grey gases plus a clear gas,
- * fitted to line-by-line integration of the HITEMP 2010 database. Coefficients from a third-party
- * transcription (not checked against the paper here): use as a cross-check of
+ * fitted to line-by-line integration of the HITEMP 2010 database. Coefficients from a secondary
+ * source's table (not checked against the paper here): use as a cross-check of
  * {@link WSGG_SMITH_1982}, or where the gas is colder than 600 K.
  */
 export const WSGG_DORIGON_2013: WsggModel = {
@@ -95,7 +95,7 @@ export const WSGG_DORIGON_2013: WsggModel = {
   source:
     'L. J. Dorigon et al., "WSGG correlations based on HITEMP2010 for computation of thermal radiation in ' +
     'non-isothermal, non-homogeneous H2O/CO2 mixtures", Int. J. Heat Mass Transfer 64 (2013) 863–873, ' +
-    'doi:10.1016/j.ijheatmasstransfer.2013.05.010 (ranges from memory; coefficients from a transcription)',
+    'doi:10.1016/j.ijheatmasstransfer.2013.05.010 (ranges from memory; coefficients from a secondary source)',
   extrapolation: 'Outside 400–2500 K, 0.001–10 atm m or ratios 1–2: flagged.',
 };
 
