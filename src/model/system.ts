@@ -137,9 +137,6 @@ export class StackWallSystem implements OdeSystem {
   private readonly circumferential: CircumferentialLinks | null;
   /** Atmospheric pressure at the site, Pa (outside air, air in gaps). */
   readonly sitePressurePa: number;
-  /** Instant and state fingerprint at which `innerSink`/`outerSink` were last computed (reused by `jacobian`). */
-  private sinksT = Number.NaN;
-  private sinksFingerprint = Number.NaN;
 
   constructor(
     readonly inputs: ModelInputs,
@@ -398,8 +395,6 @@ export class StackWallSystem implements OdeSystem {
       }
       gasIn = flue.gasOutK;
     }
-    this.sinksT = t;
-    this.sinksFingerprint = fingerprint(y);
   }
 
   /**
@@ -442,9 +437,9 @@ export class StackWallSystem implements OdeSystem {
    * diagonal (they are small next to the radial ones: Δr ≪ r Δφ).
    */
   jacobian(t: number, y: Float64Array, lower: Float64Array, diag: Float64Array, upper: Float64Array): void {
-    // the surface sinks at this state (already there when the last rhs call was at this state)
+    // the surface sinks at this state (a few Jacobians a day: recomputed rather than remembered)
     const n = this.n;
-    if (!(this.sinksT === t && this.sinksFingerprint === fingerprint(y))) this.boundaries(t, y, null);
+    this.boundaries(t, y, null);
     const links = this.circumferential;
     const capacity = this.capacity;
     const ns = this.sectors;
@@ -509,11 +504,4 @@ function circumferentialLinks(mesh: WallMesh, sectors: number): CircumferentialL
       return circumferentialConductancePerMetre(kw, 1, r, dphi);
     },
   };
-}
-
-/** A cheap fingerprint of a state vector (position-weighted sum), to recognise a repeated state. */
-function fingerprint(y: Float64Array): number {
-  let s = 0;
-  for (let i = 0; i < y.length; i++) s += y[i]! * (i + 1);
-  return s;
 }

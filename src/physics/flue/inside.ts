@@ -103,7 +103,8 @@ const mean: MutableGasProperties = { density: 0, specificHeat: 0, conductivity: 
 export function flueSideOfSegment(spec: FlueSideSpec, gasInK: number, wallK: number, massFlow: number, out: FlueSideOfSegment): FlueSideOfSegment {
   const di = spec.innerDiameter;
   const dz = spec.segmentLength;
-  const gas = insideFilmOfWall(spec, gasInK, wallK, massFlow, out);
+  const gas = spec.gas(gasInK, bulk);
+  insideFilmOfWall(spec, gas, gasInK, wallK, massFlow, out);
   const hTotal = out.filmCoefficient + out.radiationFilm;
   if (spec.gasCooling) {
     marchThroughSegment(gasInK, wallK, hTotal * Math.PI * di * dz, massFlow * gas.specificHeat, march);
@@ -121,12 +122,11 @@ export function flueSideOfSegment(spec: FlueSideSpec, gasInK: number, wallK: num
 
 /**
  * The inside film at one wall temperature: convection (fixed, or forced and natural together) and
- * gas radiation as a film coefficient, with their diagnostics, written into `out`; returns the
- * gas's bulk properties (valid until the next call).
+ * gas radiation as a film coefficient, with their diagnostics, written into `out`; `gas` holds the
+ * bulk properties at `gasInK` (looked up once by the caller, whatever the number of wall temperatures).
  */
-function insideFilmOfWall(spec: FlueSideSpec, gasInK: number, wallK: number, massFlow: number, out: FlueSideOfSegment): MutableGasProperties {
+function insideFilmOfWall(spec: FlueSideSpec, gas: Readonly<MutableGasProperties>, gasInK: number, wallK: number, massFlow: number, out: FlueSideOfSegment): void {
   const di = spec.innerDiameter;
-  const gas = spec.gas(gasInK, bulk);
   const reynolds = (4 * massFlow) / (Math.PI * di * gas.dynamicViscosity);
   let h: number;
   if (spec.filmCoefficient !== undefined) {
@@ -161,7 +161,6 @@ function insideFilmOfWall(spec: FlueSideSpec, gasInK: number, wallK: number, mas
   out.radiationFilm = hRadiation;
   out.reynolds = reynolds;
   out.prandtl = gas.prandtl;
-  return gas;
 }
 
 /** Heat into each sector's inner surface, W per metre of height, and −∂/∂T of each, W/(m K). */
@@ -199,9 +198,10 @@ export function flueSideOfSectors(
   let uaWall = 0;
   let film = 0;
   let radiationFilm = 0;
+  const gas = spec.gas(gasInK, bulk); // the bulk gas is the same for every sector
   for (let j = 0; j < n; j++) {
     const tj = walls[offset + j * stride]!;
-    insideFilmOfWall(spec, gasInK, tj, massFlow, sectorFilm);
+    insideFilmOfWall(spec, gas, gasInK, tj, massFlow, sectorFilm);
     const uaj = ((sectorFilm.filmCoefficient + sectorFilm.radiationFilm) * Math.PI * di * dz) / n;
     sectors.sinkPerMetre[j] = uaj; // UA_j for now
     ua += uaj;
@@ -210,7 +210,7 @@ export function flueSideOfSectors(
     radiationFilm += sectorFilm.radiationFilm / n;
   }
   const wallK = ua > 0 ? uaWall / ua : walls[offset]!;
-  const gas = insideFilmOfWall(spec, gasInK, wallK, massFlow, out); // the diagnostics of the mean wall
+  insideFilmOfWall(spec, gas, gasInK, wallK, massFlow, out); // the diagnostics of the mean wall
   let total: number; // Q, W
   let sink: number; // −∂Q/∂T_w, W/K
   if (spec.gasCooling) {
