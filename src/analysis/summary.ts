@@ -292,6 +292,8 @@ export interface Summary {
     readonly days_simulated: number;
     /** Which instants the figures below cover. */
     readonly evaluated_over: string;
+    /** Which instants the verdicts judge: the same, or every simulated day (a cycle run of several days that is not periodic). */
+    readonly verdicts_over: string;
     readonly periodic_requested: boolean;
     readonly periodic_reached: boolean | null;
     readonly periodic_last_change_k: number | null;

@@ -26,7 +26,8 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
   lines.push(`stackday ${s.tool.version} · ${s.scenario.name} · ${s.scenario.site} · ${s.scenario.first_day} (${s.scenario.time_zone})`);
   lines.push(`${s.run.mode === 'warmup' ? 'Warm-up study' : 'Daily cycle'}; figures over ${s.run.evaluated_over}; ${s.run.days_simulated} day(s) simulated`);
   lines.push(rule);
-  lines.push(`VERDICTS   ${s.all_limits_pass ? 'every limit that was set passes' : 'AT LEAST ONE LIMIT FAILS'}`);
+  const over = s.run.verdicts_over === s.run.evaluated_over ? '' : ` (judged over ${s.run.verdicts_over})`;
+  lines.push(`VERDICTS   ${s.all_limits_pass ? 'every limit that was set passes' : 'AT LEAST ONE LIMIT FAILS'}${over}`);
   lines.push(
     ...table(
       [

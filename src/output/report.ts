@@ -138,7 +138,7 @@ function verdictSection(summary: Summary): string {
   return `<section id="verdicts"><h2>Verdicts</h2>
 ${overall}
 ${table(['Status', 'Limit', 'Governing figure', 'Limit value', 'When (local)', 'Height (m)'], rows, 'verdicts')}
-<p class="note">Figures cover ${esc(summary.run.evaluated_over)}${summary.annual ? `; the annual limits (hours a year, cycles) cover every day from ${esc(summary.annual.first_day)} to ${esc(summary.annual.last_day)}` : ''}. For warm-up studies the dew-point rows give the minutes from firing until the slowest height stays above the dew point plus its margin.</p>
+<p class="note">Verdicts judge ${esc(summary.run.verdicts_over)}; the figures below cover ${esc(summary.run.evaluated_over)}${summary.annual ? `; the annual limits (hours a year, cycles) cover every day from ${esc(summary.annual.first_day)} to ${esc(summary.annual.last_day)}` : ''}. For warm-up studies the dew-point rows give the minutes from firing until the slowest height stays above the dew point plus its margin.</p>
 </section>`;
 }
 

@@ -123,7 +123,10 @@ export function summariseRun({ inputs, result, version, description, daily, annu
   const margins = lowestMargins(ev);
   const energy = evaluatedEnergy(result, mode);
   const warmup = mode === 'warmup' && result.firingStartT !== null ? warmupTimes(ev, result.firingStartT, inputs.limits) : null;
-  const verdictList = verdicts(ev, { mode, limits: inputs.limits, extremes, layers, margins, warmup });
+  // a cycle run of several days that is not periodic is judged on every day (when the daily sink saw them all)
+  const worst = mode === 'cycle' && result.periodic === null && result.daysSimulated > 1 ? (daily?.runWorst() ?? null) : null;
+  const runWide = worst ? { worst, days: result.daysSimulated, layers: inputs.layers } : null;
+  const verdictList = verdicts(ev, { mode, limits: inputs.limits, extremes, layers, margins, warmup, runWide });
 
   const weatherNotes = inputs.weather.kind === 'file' ? inputs.weather.notes : undefined;
   const warnings = [...(weatherNotes?.warnings ?? []), ...result.warnings];
@@ -146,6 +149,7 @@ export function summariseRun({ inputs, result, version, description, daily, annu
       mode,
       days_simulated: result.daysSimulated,
       evaluated_over: evaluatedOver(result, mode),
+      verdicts_over: runWide ? `all ${runWide.days} simulated days` : evaluatedOver(result, mode),
       periodic_requested: result.periodic !== null,
       periodic_reached: result.periodic ? result.periodic.reached : null,
       periodic_last_change_k: result.periodic ? round(result.periodic.lastChangeK, 4) : null,

@@ -41,6 +41,13 @@ export function throughWallMaxDeltaT(ev: Evaluated): Located {
   return locateLargest(ev, (k, seg) => Math.abs(T(k, seg, 0) - T(k, seg, N - 1)), -1);
 }
 
+/** The thermal-stress indicator of a layer at a difference `deltaK` across it, MPa; null for a layer without elastic data. */
+export function layerStressMpa(material: LayerInput['material'], deltaK: number): number | null {
+  return material.kind === 'solid' && material.youngsModulus > 0 && material.thermalExpansion > 0
+    ? thermalStressIndicator(material.youngsModulus, material.thermalExpansion, material.poissonRatio, deltaK) / 1e6
+    : null;
+}
+
 /** Every layer as summary.json states it, inside → outside, with where its largest difference occurs. */
 export function layerSummaries(ev: Evaluated, layerInputs: readonly LayerInput[]): { layers: LayerSummary[]; maxDeltaT: Located[] } {
   const maxDeltaT = ev.series.layers.map((layer) => layerMaxDeltaT(ev, layer));
@@ -48,7 +55,7 @@ export function layerSummaries(ev: Evaluated, layerInputs: readonly LayerInput[]
     const { minK, maxK, swingK } = layerRange(ev, layer);
     const dMax = maxDeltaT[j]!.value;
     const m = layerInputs[j]!.material;
-    const stress = m.kind === 'solid' && m.youngsModulus > 0 && m.thermalExpansion > 0 ? thermalStressIndicator(m.youngsModulus, m.thermalExpansion, m.poissonRatio, dMax) / 1e6 : null;
+    const stress = layerStressMpa(m, dMax);
     const w = timeAndHeight(ev.series, maxDeltaT[j]!.at);
     return {
       label: layer.label,
