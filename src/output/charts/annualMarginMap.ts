@@ -71,7 +71,8 @@ export function annualMarginMap(summary: Summary, parts: AnnualParts, inputs: Mo
   const topHeight = parts.layout.heightM[parts.layout.segments - 1]!;
   const dewName = acid ? 'acid' : 'water';
   const dewC = acid ? summary.acid_dew_point_c : summary.water_dew_point_c;
-  const subtitle = `At ${fixed(topHeight)} m; dew point ${fixed(dewC)} °C; required margin ${fixed(required, 0)} K; ${unsafeHours === 0 ? 'no hour below the dew point' : `${unsafeHours} hours with an instant BELOW the dew point (outlined)`}; each cell the lowest margin of its hour`;
+  // (kept short: it must fit the chart width on one line)
+  const subtitle = `At ${fixed(topHeight)} m; dew point ${fixed(dewC)} °C, margin ${fixed(required, 0)} K; ${unsafeHours === 0 ? 'no hour below it' : `${unsafeHours} h with an instant BELOW it (outlined)`}; a cell: its hour's lowest margin`;
   const xTitle = annual.first_day.endsWith('-01-01') ? `Day of the year ${annual.first_day.slice(0, 4)} (d)` : `Day of the run from ${annual.first_day} (d)`;
   const base = baseOptions(`The year at the top: inner surface margin above the ${dewName} dew point`, subtitle, f, 'bottom');
   return {
