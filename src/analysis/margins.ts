@@ -5,8 +5,8 @@
  */
 import type { Verdict } from './summary.ts';
 
-/** Limits whose figure must stay at or below the limit; the others (the dew-point margins) must stay at or above it. */
-const UPPER_LIMITS = new Set(['shell_touch', 'lining_service', 'allowable_stress']);
+/** Limits whose figure must stay at or below the limit (temperatures, stress, hours a year below a dew point, cycles a year); the others (the dew-point margins) must stay at or above it. */
+const UPPER_LIMITS = new Set(['shell_touch', 'lining_service', 'allowable_stress', 'acid_dew_hours_per_year', 'water_dew_hours_per_year', 'cycles_above']);
 
 /**
  * The margin of a verdict in its unit (°C and K differences, MPa), null when the limit is not set

@@ -218,7 +218,10 @@ export interface AnnualSummary
     /** The whole wall first, then each layer inside → outside. */
     readonly across: readonly WallCycles[];
   };
-  /** Verdicts on the annual limits: hours below the acid and water dew points, cycles above a range. */
+}
+
+/** An annual run's figures with its verdicts on the annual limits (hours below the acid and water dew points, cycles above a range), which the summary lists with the others in `verdicts`. */
+export interface AnnualOutcome extends AnnualSummary {
   readonly verdicts: readonly Verdict[];
 }
 
@@ -361,7 +364,7 @@ export interface Summary {
   } | null;
   /** Figures of every simulated day (a periodic study: its settled day only), first to last. */
   readonly daily: readonly DayFigures[];
-  /** Annual runs only (run.days: year or run.last_day): monthly and annual figures, thermal cycles, annual verdicts. */
+  /** Annual runs only (run.days: year or run.last_day): monthly and annual figures, thermal cycles (their verdicts are in `verdicts`). */
   readonly annual?: AnnualSummary;
   /** What the run assumed (wind conversion, pressures, gas radiation, clear sky) and every accepted extrapolation of a correlation, once each. */
   readonly assumptions: readonly string[];

@@ -32,7 +32,7 @@ export function resultSheet(s: Summary, outDir?: string, timing?: { readonly sec
     ...table(
       [
         ['', 'limit', 'found', 'allowed', 'unit', 'when', 'height m'],
-        ...[...s.verdicts, ...(s.annual?.verdicts ?? [])].map((v) => [STATUS_WORD[v.status], v.title, num(v.governing_value), num(v.limit_value), v.unit, hhmm(v.time_local), num(v.height_m)]),
+        ...s.verdicts.map((v) => [STATUS_WORD[v.status], v.title, num(v.governing_value), num(v.limit_value), v.unit, hhmm(v.time_local), num(v.height_m)]),
       ],
       ['l', 'l', 'r', 'r', 'l', 'l', 'r'],
     ).map((l) => `  ${l}`),

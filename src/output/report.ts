@@ -127,7 +127,7 @@ function initialWords(initial: ModelInputs['run']['initial']): string {
 }
 
 function verdictSection(summary: Summary): string {
-  const all = [...summary.verdicts, ...(summary.annual?.verdicts ?? [])];
+  const all = summary.verdicts;
   const rows = all.map((v) => {
     const limit = v.limit_value === null ? 'not set' : `${num(v.limit_value, 2)} ${esc(v.unit)}`;
     const gov = v.governing_value === null ? MISSING : `${num(v.governing_value, 2)} ${esc(v.unit)}`;

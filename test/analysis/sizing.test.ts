@@ -102,4 +102,10 @@ describe('verdictMargin', () => {
     expect(verdictMargin(v('acid_dew_margin', null, 10, 'K', 'not-set'))).toBeNull();
     expect(verdictMargin(v('water_dew_margin', 42, null, 'min'))).toBeNull();
   });
+
+  it('treats the annual limits (hours a year below a dew point, cycles a year) as upper limits', () => {
+    expect(verdictMargin(v('acid_dew_hours_per_year', 600, 500, 'h', 'fail'))).toBe(-100);
+    expect(verdictMargin(v('water_dew_hours_per_year', 20, 50, 'h'))).toBe(30);
+    expect(verdictMargin(v('cycles_above', 234, 500, 'cycles'))).toBe(266);
+  });
 });

@@ -8,7 +8,7 @@
 import type { LimitsInput, ModelInputs } from '../../model/inputs.ts';
 import type { EnergyAccount, SeriesLayout } from '../../model/timeseries.ts';
 import { kelvinToCelsius as c } from '../../physics/constants.ts';
-import type { AnnualSummary, CyclesAtHeight, HeightHours, MonthFigures, Verdict, WallCycles } from '../summary.ts';
+import type { AnnualOutcome, CyclesAtHeight, HeightHours, MonthFigures, Verdict, WallCycles } from '../summary.ts';
 import { round } from '../rounding.ts';
 import type { AnnualParts } from './recorder.ts';
 import type { SecondsBelow } from './dewHours.ts';
@@ -155,7 +155,7 @@ function monthFigures(month: string, parts: AnnualParts, energyByDay: readonly E
 }
 
 /** The `annual` section of summary.json from the statistics gathered and each day's energy account. */
-export function annualSummary(parts: AnnualParts, energyByDay: readonly EnergyAccount[], inputs: ModelInputs): AnnualSummary {
+export function annualSummary(parts: AnnualParts, energyByDay: readonly EnergyAccount[], inputs: ModelInputs): AnnualOutcome {
   const annual = inputs.annual!;
   const { layout } = parts;
   const days = parts.dayDates.length;

@@ -8,7 +8,7 @@
 import type { ModelInputs } from '../../model/inputs.ts';
 import type { RunResult, TimeSeries } from '../../model/timeseries.ts';
 import { runAssumptions } from '../assumptions.ts';
-import { AVERAGED_SUN_CAUTION, CAUTIONS, type AnnualSummary, type Summary } from '../summary.ts';
+import { AVERAGED_SUN_CAUTION, CAUTIONS, type AnnualOutcome, type AnnualSummary, type Summary } from '../summary.ts';
 import { sectorFigures } from './sectors.ts';
 import { round } from '../rounding.ts';
 import { evaluated, type Evaluated, type Location } from './evaluated.ts';
@@ -41,7 +41,7 @@ export interface SummaryContext {
    */
   readonly daily?: DailyExtremes;
   /** An annual run's figures (analysis/annual, from the statistics a sink gathered while the run went): the summary's `annual` section. */
-  readonly annual?: AnnualSummary;
+  readonly annual?: AnnualOutcome;
   /** The accuracy check of the run (from `simulateWithAccuracy`); without it the summary states no estimate. */
   readonly accuracy?: AccuracyOutcome;
 }
@@ -126,7 +126,8 @@ export function summariseRun({ inputs, result, version, description, daily, annu
   // a cycle run of several days that is not periodic is judged on every day (when the daily sink saw them all)
   const worst = mode === 'cycle' && result.periodic === null && result.daysSimulated > 1 ? (daily?.runWorst() ?? null) : null;
   const runWide = worst ? { worst, days: result.daysSimulated, layers: inputs.layers } : null;
-  const verdictList = verdicts(ev, { mode, limits: inputs.limits, extremes, layers, margins, warmup, runWide });
+  // one list of every verdict: the limits of any run, then an annual run's (hours a year, cycles)
+  const verdictList = [...verdicts(ev, { mode, limits: inputs.limits, extremes, layers, margins, warmup, runWide }), ...(annual?.verdicts ?? [])];
 
   const weatherNotes = inputs.weather.kind === 'file' ? inputs.weather.notes : undefined;
   const warnings = [...(weatherNotes?.warnings ?? []), ...result.warnings];
@@ -171,7 +172,7 @@ export function summariseRun({ inputs, result, version, description, daily, annu
     },
     accuracy: statement,
     verdicts: verdictList,
-    all_limits_pass: [...verdictList, ...(annual?.verdicts ?? [])].every((v) => v.status !== 'fail'),
+    all_limits_pass: verdictList.every((v) => v.status !== 'fail'),
     ...wallExtremeFigures(ev, extremes),
     positions,
     layers,
@@ -182,7 +183,7 @@ export function summariseRun({ inputs, result, version, description, daily, annu
     energy_residual_run_percent: round(result.energy.run.residualPercent, 6),
     warmup,
     daily: dailyFigures(result, daily),
-    ...(annual ? { annual } : {}),
+    ...(annual ? { annual: annualFigures(annual) } : {}),
     assumptions: runAssumptions(inputs, result),
     warnings,
     cautions: sectors ? CAUTIONS.filter((x) => x !== AVERAGED_SUN_CAUTION) : CAUTIONS,
@@ -202,6 +203,11 @@ export function summariseRun({ inputs, result, version, description, daily, annu
       sectors: sectors ? { sunniest: sectors.at.sunniest, shadiest: sectors.at.shadiest } : null,
     },
   };
+}
+
+/** The summary's annual section: the annual figures without their verdicts (listed with the others). */
+function annualFigures({ verdicts: _listedWithTheOthers, ...figures }: AnnualOutcome): AnnualSummary {
+  return figures;
 }
 
 /** Which instants the figures cover, in words. */
