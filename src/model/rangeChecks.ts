@@ -26,6 +26,7 @@ export interface RangeCheckContext {
 export function checkCorrelationRanges(ctx: RangeCheckContext, t: number, y: Float64Array, diag: SegmentDiagnostics, tally: CorrelationRangeTally): void {
   const { inputs, mesh, geometry } = ctx;
   const n = mesh.nodeCount;
+  const sectors = inputs.stack.sectors ?? 1;
   for (let s = 0; s < geometry.segments; s++) {
     place.t = t; // (one object for every note: the tally copies the place it keeps)
     place.heightM = geometry.midHeight[s]!;
@@ -47,7 +48,9 @@ export function checkCorrelationRanges(ctx: RangeCheckContext, t: number, y: Flo
       tally.note(USE.gasRadiation, { temperature: diag.gasInK[s]!, pathLength: diag.pathLengthAtmM[s]!, ratio: diag.waterToCarbonDioxide[s]! }, place);
     for (let i = 0; i < n - 1; i++) {
       if (mesh.linkKind[i] !== LINK_GAP) continue;
-      gapConvectionInputs(mesh.linkGap[i]!, y[s * n + i]!, y[s * n + i + 1]!, gapInputs, ctx.sitePressurePa, geometry.segmentLength);
+      // (the segment's first column: with sectors, its sector 0)
+      const o = s * sectors * n;
+      gapConvectionInputs(mesh.linkGap[i]!, y[o + i]!, y[o + i + 1]!, gapInputs, ctx.sitePressurePa, geometry.segmentLength);
       if (gapInputs.rayleighGap > 0) tally.note(USE.gapConvection, gapConvectionRangeInputs(gapInputs), place);
     }
   }
