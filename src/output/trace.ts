@@ -8,13 +8,14 @@
 import type { TimeSeries } from '../model/timeseries.ts';
 import { SECONDS_PER_DAY } from '../physics/constants.ts';
 import { celsius, clockHours, decimals, round } from './format.ts';
+import { nodeTemperatureK } from './charts/parts.ts';
 
 export interface RunTrace {
   /** Hours of the local day of each evaluated instant: clock time of the first, then elapsed time (4 decimals). */
   readonly hours: readonly number[];
-  /** Hottest outer-surface temperature over all heights at each instant, °C. */
+  /** Hottest outer-surface temperature over all heights (and sectors) at each instant, °C. */
   readonly shellC: readonly number[];
-  /** Inner-surface temperature of the top segment, °C. */
+  /** Inner-surface temperature of the top segment (its coldest sector, which the dew points govern), °C. */
   readonly innerTopC: readonly number[];
   /** Inner surface minus the acid dew point in the top segment, K (null when the gas has no acid dew point). */
   readonly acidMarginTopK: readonly (number | null)[];
@@ -53,7 +54,7 @@ function traceFromColumns(iso: readonly string[], hours: readonly number[], shel
 
 /** The trace of a run in memory. */
 export function traceOfSeries(series: TimeSeries, mode: 'cycle' | 'warmup'): RunTrace {
-  const { segments: S, nodes: N } = series;
+  const { segments: S, nodes: N, sectors } = series;
   const K = series.t.length;
   const t0 = series.t[0] ?? 0;
   const top = S - 1;
@@ -64,9 +65,13 @@ export function traceOfSeries(series: TimeSeries, mode: 'cycle' | 'warmup'): Run
   for (let k = 0; k < K; k++) {
     hours.push(asWritten((series.t[k]! - t0) / 3600, 4)!);
     let hottest = -Infinity;
-    for (let s = 0; s < S; s++) hottest = Math.max(hottest, asWritten(celsius(series.temperatureK[(k * S + s) * N + N - 1]!), 3)!);
+    let coldestInner = Infinity;
+    for (let j = 0; j < sectors; j++) {
+      for (let s = 0; s < S; s++) hottest = Math.max(hottest, asWritten(celsius(nodeTemperatureK(series, k, s, N - 1, j)), 3)!);
+      coldestInner = Math.min(coldestInner, asWritten(celsius(nodeTemperatureK(series, k, top, 0, j)), 3)!);
+    }
     shell.push(hottest);
-    inner.push(asWritten(celsius(series.temperatureK[(k * S + top) * N]!), 3)!);
+    inner.push(coldestInner);
     acid.push(asWritten(series.segment.acidDewMarginK[k * S + top]!, 3));
   }
   return traceFromColumns(series.isoLocal, hours, shell, inner, acid, asWritten(series.heightM[top]!, 3)!, mode);
@@ -105,8 +110,10 @@ export function traceOfCsv(timeseriesCsv: string, segmentsCsv: string, mode: 'cy
     const position = cells[cPos];
     if (position === 'outer_surface') shell[k] = Math.max(shell[k]!, Number(cells[cTemp]));
     else if (position === 'inner_surface') {
+      // the top height's coldest sector (one row per sector)
       const best = innerAt.get(time);
       if (!best || height > best.height) innerAt.set(time, { height, value: Number(cells[cTemp]) });
+      else if (height === best.height) best.value = Math.min(best.value, Number(cells[cTemp]));
     }
   }
   const segLines = segmentsCsv.split('\n').filter((l) => l !== '');

@@ -9,8 +9,8 @@ import { runScenario } from '../../src/index.ts';
 import { shortDemo } from '../support/shortScenario.ts';
 
 describe('run traces', () => {
-  it('read back from timeseries.csv and segments.csv equal the trace of the run in memory, for a daily cycle and a warm-up', () => {
-    for (const edit of [(s: any) => (s.run.days = 2), (s: any) => Object.assign(s.run, { mode: 'warmup', firing_start: '05:30', days: 1 })]) {
+  it('read back from timeseries.csv and segments.csv equal the trace of the run in memory, for a daily cycle, a warm-up and a wall with sectors', () => {
+    for (const edit of [(s: any) => (s.run.days = 2), (s: any) => Object.assign(s.run, { mode: 'warmup', firing_start: '05:30', days: 1 }), (s: any) => Object.assign(s.stack, { sectors: 4 })]) {
       const run = runScenario(shortDemo(edit));
       const mode = run.inputs.run.mode;
       const fromMemory = traceOfSeries(run.result.series, mode);
@@ -31,5 +31,14 @@ describe('run traces', () => {
     expect(Math.max(...t.shellC)).toBeCloseTo(run.summary.peak_shell_c, 2);
     expect(Math.min(...t.acidMarginTopK.map((m) => m!))).toBeGreaterThanOrEqual(run.summary.lowest_acid_dew_margin_k! - 0.005);
     expect(t.topHeightM).toBeCloseTo(run.result.series.heightM[2]!, 3);
+  });
+
+  it("with sectors: the shell trace peaks at the hottest sector, the inner surface is the top's coldest sector", () => {
+    const run = runScenario(shortDemo((s: any) => Object.assign(s.stack, { sectors: 4 })));
+    const t = traceOfSeries(run.result.series, 'cycle');
+    expect(Math.max(...t.shellC)).toBeCloseTo(run.summary.peak_shell_c, 2);
+    // the top margin is the coldest sector's inner surface minus the acid dew point
+    const dewC = run.summary.acid_dew_point_c!;
+    t.innerTopC.forEach((c, k) => expect(Math.abs(c - dewC - t.acidMarginTopK[k]!)).toBeLessThan(0.05));
   });
 });
