@@ -202,12 +202,13 @@ export function limitDatasets(limits: readonly Limit[], x0: number, x1: number, 
   });
 }
 
-/** The limits and dew points a temperature chart shows, °C: shell touch and lining service (as asked), each dew point, and each dew point plus its margin (as asked). */
-export function temperatureLimits(series: TimeSeries, inputs: ModelInputs, which: { shell: boolean; lining: boolean; margins: boolean }): Limit[] {
+/** The limits and dew points a temperature chart shows, °C: shell touch and lining service (as asked), each dew point (unless `dews` is false), and each dew point plus its margin (as asked). */
+export function temperatureLimits(series: TimeSeries, inputs: ModelInputs, which: { shell: boolean; lining: boolean; margins: boolean; dews?: boolean }): Limit[] {
   const out: Limit[] = [];
   const lim = inputs.limits;
   if (which.shell && lim.shellTouchK !== undefined) out.push({ label: 'Shell touch limit', valueC: celsius(lim.shellTouchK), look: LOOK.shellTouch });
   if (which.lining && lim.liningServiceK !== undefined) out.push({ label: `${series.layers[0]?.label ?? 'Lining'} service limit`.replace(/^./, (c) => c.toUpperCase()), valueC: celsius(lim.liningServiceK), look: LOOK.liningService });
+  if (which.dews === false) return out;
   if (series.acidDewPointK !== null) {
     out.push({ label: 'Acid dew point', valueC: celsius(series.acidDewPointK), look: LOOK.acidDew });
     if (which.margins && lim.acidDewMarginK) out.push({ label: `Acid dew point + ${fixed(lim.acidDewMarginK, 0)} K margin`, valueC: celsius(series.acidDewPointK + lim.acidDewMarginK), look: LOOK.acidDewMargin });

@@ -32,7 +32,7 @@ export function shellSunnyAndShadySides(series: TimeSeries, summary: Summary, in
     lineDataset('Mean round the circumference', mean, LOOK.roundMean, f, 2),
   ];
   const y = minMax(datasets.flatMap((d) => d.data.map((p) => p.y)));
-  const limits = temperatureLimits(series, inputs, { shell: true, lining: false, margins: false }).slice(0, 1);
+  const limits = temperatureLimits(series, inputs, { shell: true, lining: false, margins: false, dews: false });
   const bounds = boundsWithLimits(y.lo, y.hi, limits);
   const x0 = hours[0] ?? 0;
   const x1 = hours[hours.length - 1] ?? 24;

@@ -32,7 +32,7 @@ export function shellRoundTheCircumference(series: TimeSeries, _summary: Summary
     ),
   );
   const y = minMax(datasets.flatMap((d) => d.data.map((p) => p.y)));
-  const limits = temperatureLimits(series, inputs, { shell: true, lining: false, margins: false }).slice(0, 1);
+  const limits = temperatureLimits(series, inputs, { shell: true, lining: false, margins: false, dews: false });
   const bounds = boundsWithLimits(y.lo, y.hi, limits);
   const sunAz = series.instant.sunAzimuthDeg[k]!;
   const sunUp = series.instant.sunAltitudeDeg[k]! > 0;

@@ -177,3 +177,25 @@ describe('chart configurations', () => {
     expect(byLabel(c, 'Water dew point + 5 K margin').data[0]!.y).toBeCloseTo(warm.summary.water_dew_point_c + 5, 2);
   });
 });
+
+describe('the sector charts', () => {
+  it('draw the shell touch limit and nothing else as a limit: no dew point stands in for an unset touch limit', async () => {
+    const { runScenario } = await import('../../../src/index.ts');
+    const { shortDemo } = await import('../../support/shortScenario.ts');
+    const { shellRoundTheCircumference } = await import('../../../src/output/charts/shellRound.ts');
+    const { shellSunnyAndShadySides } = await import('../../../src/output/charts/sectorsThroughDay.ts');
+    for (const touch of [60, undefined]) {
+      const run = runScenario(shortDemo((s: any) => {
+        s.stack.sectors = 4;
+        if (touch === undefined) delete s.limits.shell_touch;
+        else s.limits.shell_touch = touch;
+      }));
+      const sides = run.locations.sectors!;
+      for (const c of [shellRoundTheCircumference(run.result.series, run.summary, run.inputs, run.locations.peakShell), shellSunnyAndShadySides(run.result.series, run.summary, run.inputs, sides)]) {
+        const labels = datasets(c).map((d) => d.label);
+        expect(labels.some((l) => /dew point/i.test(l))).toBe(false);
+        expect(labels.some((l) => l.startsWith('Shell touch limit'))).toBe(touch !== undefined);
+      }
+    }
+  });
+});
