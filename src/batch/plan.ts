@@ -46,12 +46,16 @@ export const holdsPlan = (dir: string): boolean => existsSync(join(resolve(dir),
 export const SCENARIO_LIST = 'scenarios.txt';
 
 /**
- * The raw scenario of a case as a planned file holds it: the overrides applied, and its weather
- * file (if any) copied into the plan's weather/ folder once (`copies`: source path → name there)
- * and named relative to the planned file.
+ * The raw scenario of a case as a planned file holds it: the overrides applied; its per-instant
+ * files as `collect` reads them back (every instant of a warm-up, the last day of a cycle, with no
+ * thinning: the scenario's own `output` section is replaced); and its weather file (if any) copied
+ * into the plan's weather/ folder once (`copies`: source path → name there) and named relative to
+ * the planned file.
  */
 function plannedScenario(c: ScenarioCase, root: string, copies: Map<string, string>): unknown {
-  const s = withOverrides(c.raw, c.overrides) as { weather?: { file?: unknown } };
+  const s = withOverrides(c.raw, c.overrides) as { weather?: { file?: unknown }; run?: { mode?: unknown }; output?: unknown };
+  const form = s.run?.mode === 'warmup' ? 'all' : 'last-day';
+  s.output = { timeseries: form, segments: form };
   const file = s.weather?.file;
   if (typeof file !== 'string') return s;
   const source = resolve(c.baseDir, file);

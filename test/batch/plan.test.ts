@@ -16,7 +16,11 @@ let dir: string;
 let file: string;
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'stackday-plan-'));
-  file = shortDemoFile(dir, 'plan-base', (s) => (s.name = 'plan-base'));
+  // per-instant files the user thinned or turned off: a plan's runs still write what collect reads back
+  file = shortDemoFile(dir, 'plan-base', (s) => {
+    s.name = 'plan-base';
+    s.output = { timeseries: 'daily-extremes', segments: 'off' };
+  });
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
@@ -61,6 +65,8 @@ describe('serial, pooled and planned-then-collected sweeps', () => {
     expect((await runCli(['sweep', 'scenarios/kiln-warmup.yaml', '--vary', 'surface.emissivity=0.5,0.9', '--plan', plan, '--quiet'])).code).toBe(0);
     expect(readdirSync(join(plan, 'weather'))).toEqual(['ridgeport-2026-01.csv']);
     expect(readFileSync(join(plan, 'weather', 'ridgeport-2026-01.csv')).equals(readFileSync('scenarios/weather/ridgeport-2026-01.csv'))).toBe(true);
+    // a warm-up plan keeps every instant for collect
+    expect(readFileSync(join(plan, 'scenarios', 'emissivity-0.5.yaml'), 'utf8')).toMatch(/^output:\n {2}timeseries: all\n {2}segments: all$/m);
     const check = await runCli(['check', join(plan, 'scenarios', 'emissivity-0.5.yaml')]);
     expect(check.code, check.stderr).toBe(0);
     // a plan is written once: a second plan into the same folder is refused
