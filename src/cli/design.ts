@@ -13,7 +13,7 @@ import { comparisonArtefacts, sweepArtefacts } from '../batch/artefacts.ts';
 import type { NotRun } from '../analysis/compare.ts';
 import { notRunLines, sizingSheet, sweepSheet } from '../output/designSheets.ts';
 import { writeArtefactsAtomically } from '../output/write.ts';
-import { checkOutputFolder } from '../output/fileErrors.ts';
+import { checkReplaceable } from '../output/folder.ts';
 import { comparisonStudy, runBatch, sweepCases, sweepStudy, type SweepStudy } from '../batch/study.ts';
 import { CasePool, chooseThreads, runCasesSerially } from '../batch/pool.ts';
 import { holdsPlan, writePlan, SCENARIO_LIST } from '../batch/plan.ts';
@@ -61,9 +61,9 @@ function reportNotRun(notRun: readonly NotRun[], total: number): void {
   process.stderr.write(`stackday: ${notRun.length} of ${total} cases did not run: ${notRun.map((n) => `${n.scenario} (${n.status === 'invalid' ? 'not a valid scenario' : 'could not be computed'})`).join(', ')}\n`);
 }
 
-/** An output folder that cannot be written is reported before a batch runs, not after it. */
+/** An output folder that cannot be written or replaced is reported before a batch runs, not after it. */
 function ensureWritable(dir: string): void {
-  const obstacle = checkOutputFolder(dir);
+  const obstacle = checkReplaceable(resolve(dir));
   if (obstacle) throw obstacle;
 }
 

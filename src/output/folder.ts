@@ -20,6 +20,7 @@
 import { existsSync, lstatSync, mkdirSync, readdirSync, renameSync, rmSync, statSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { randomBytes } from 'node:crypto';
+import { checkOutputFolder } from './fileErrors.ts';
 
 /** The output folder cannot be used (it is a file, or it holds files stackday did not write). */
 export class OutputFolderError extends Error {
@@ -75,6 +76,18 @@ function foreignContent(target: string): string | null {
   if (foreign.length === 0) return null;
   const names = foreign.slice(0, 3).map((e) => `"${e.name}"${e.isDirectory() ? ' (a folder)' : ''}`);
   return `holds ${names.join(', ')}${foreign.length > 3 ? ` and ${foreign.length - 3} more` : ''}, which stackday did not write; give a new or empty folder, or one a previous run wrote`;
+}
+
+/**
+ * Whether results may be written to `target` now: it can be made and written (checkOutputFolder),
+ * and what it holds stackday may replace. Returns the problem, or null. For commands that compute
+ * long before they write (a batch): the same refusal a run meets when it opens its folder, at once.
+ */
+export function checkReplaceable(target: string): Error | null {
+  const obstacle = checkOutputFolder(target);
+  if (obstacle) return obstacle;
+  const why = foreignContent(target);
+  return why === null ? null : new OutputFolderError(target, why);
 }
 
 /**

@@ -332,4 +332,16 @@ describe('the output folder cannot be written (exit 4, a one-line message naming
     const b = scenarioFile('cmp-env-b', (s) => (s.name = 'cmp-env-b'));
     await expectEnvironmentFailure(['compare', a, b, '--out', file], /it is a file, not a folder \(ENOTDIR\)/);
   });
+
+  it('a sweep into a folder holding files stackday did not write: refused before any case runs', async () => {
+    const out = join(dir, 'sweep-foreign');
+    mkdirSync(out, { recursive: true });
+    writeFileSync(join(out, 'notes.txt'), 'keep me');
+    // eight cases of two weeks each take well over 5 s serially; the refusal comes before the first
+    const week = scenarioFile('sweep-foreign', (x) => Object.assign(x.run, { days: 14, output_interval: 10 }));
+    const started = performance.now();
+    await expectEnvironmentFailure(['sweep', week, '--vary', 'surface.emissivity=0.2,0.3,0.4,0.5,0.6,0.7,0.8,0.9', '--threads', '1', '--out', out, '--quiet'], new RegExp(`output folder "${out}" .*notes\\.txt`));
+    expect(performance.now() - started).toBeLessThan(5000);
+    expect(readdirSync(out)).toEqual(['notes.txt']);
+  });
 });
