@@ -213,9 +213,11 @@ export async function sizeCommand(file: string, opts: SizeCommandOptions): Promi
     await pool?.close();
   }
   const report = sizingReport(result, axis.key, resolution);
-  if (opts.out) writeArtefactsAtomically(resolve(opts.out), [{ fileName: 'sizing.json', content: `${JSON.stringify(report, null, 2)}\n` }]);
+  // nothing ran (every probe invalid): bad input, and nothing is written (exit 2 promises it)
+  const nothingRan = result.status === 'not-run';
+  if (opts.out && !nothingRan) writeArtefactsAtomically(resolve(opts.out), [{ fileName: 'sizing.json', content: `${JSON.stringify(report, null, 2)}\n` }]);
   if (opts.json) process.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
   else if (!opts.quiet) process.stdout.write(`${sizingSheet(result, axis.key, resolution).join('\n')}\n`);
-  if (result.status === 'not-run') return EXIT_BAD_INPUT;
+  if (nothingRan) return EXIT_BAD_INPUT;
   return result.status === 'none-passes' ? EXIT_LIMIT_FAILED : EXIT_OK;
 }

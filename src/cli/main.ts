@@ -2,12 +2,7 @@
 /**
  * The `stackday` command: a thin layer over the library (no physics here).
  *
- * Exit codes (errors.ts): 0 the run completed (whatever the verdicts); 1 an internal error (a bug);
- * 2 bad input (scenario, weather file, options) or a run that could not be computed — nothing is
- * written; 3 the run completed, a limit failed and --strict was given (for `size`: no value of the
- * range meets every limit); 4 the environment failed (the output folder cannot be made or written,
- * a full disk, a file-size limit, memory); 5 a batch ran and wrote its results but some of its
- * cases did not run.
+ * Exit codes: errors.ts defines them, EXIT_CODES_HELP below says them in every command's --help.
  */
 import { Command, Option } from 'commander';
 import { resolve, join, dirname } from 'node:path';
@@ -267,7 +262,7 @@ export function buildProgram(): Command {
       const rows = describeMaterialsTable();
       process.stdout.write(`${table(rows).join('\n')}\n`);
     });
-  for (const name of ['run', 'warmup', 'compare', 'check']) program.commands.find((c) => c.name() === name)?.addHelpText('after', EXIT_CODES_HELP);
+  for (const command of program.commands) command.addHelpText('after', EXIT_CODES_HELP);
   return program;
 }
 

@@ -138,4 +138,11 @@ describe('size', () => {
     expect(unit.code).toBe(2);
     expect(unit.stderr).toMatch(/--resolution: found "1 in"; expected a positive step in the range's unit \(mm\)/);
   });
+
+  it('every probe invalid: nothing ran, nothing written (exit 2)', async () => {
+    const out = join(dir, 'size-all-bad');
+    const r = await runCli(['size', shellGoverned('size-all-bad'), '--vary', 'surface.emissivity=1.5..2', '--resolution', '0.5', '--threads', '1', '--out', out]);
+    expect(r.code).toBe(2);
+    expect(existsSync(out)).toBe(false);
+  });
 });
