@@ -3,6 +3,7 @@
  * limit, and at what heat loss? Pure: summaries in, rows and a recommendation out.
  */
 import type { Summary } from './summary.ts';
+import { round } from './rounding.ts';
 
 export interface ComparisonRow {
   readonly scenario: string;
@@ -33,19 +34,28 @@ export interface NotRun {
   readonly problems: readonly string[];
 }
 
+/**
+ * A row of the comparison: the figures the verdicts judged. Over the reported day as a rule; for a
+ * run whose verdicts judge every simulated day (several days, not periodic: a year) the worst of
+ * every day (the verdicts' governing figures) and the mean heat loss per day over the run, so that
+ * a row never passes a figure its verdict failed, nor ranks a year by its last day.
+ */
 export function comparisonRow(summary: Summary): ComparisonRow {
   const stresses = summary.layers.map((l) => l.stress_indicator_mpa).filter((v): v is number => v !== null);
+  const wide = summary.run.verdicts_over !== summary.run.evaluated_over;
+  const governing = (limit: string, reported: number | null): number | null => (wide ? (summary.verdicts.find((v) => v.limit === limit)?.governing_value ?? reported) : reported);
+  const dailyLoss = summary.daily.map((d) => d.heat_loss_kwh).filter((v): v is number => v !== null);
   return {
     scenario: summary.scenario.name,
     build_up: summary.layers.map((l) => `${l.thickness_mm} mm ${l.material}`).join(' | '),
     all_limits_pass: summary.all_limits_pass,
     failed_limits: summary.verdicts.filter((v) => v.status === 'fail').map((v) => v.limit),
-    peak_shell_c: summary.peak_shell_c,
-    peak_lining_c: summary.peak_lining_c,
-    lowest_acid_dew_margin_k: summary.lowest_acid_dew_margin_k,
-    lowest_water_dew_margin_k: summary.lowest_water_dew_margin_k,
-    max_stress_indicator_mpa: stresses.length ? Math.max(...stresses) : null,
-    heat_loss_kwh_per_day: summary.heat_loss_kwh_per_day,
+    peak_shell_c: governing('shell_touch', summary.peak_shell_c)!,
+    peak_lining_c: governing('lining_service', summary.peak_lining_c)!,
+    lowest_acid_dew_margin_k: governing('acid_dew_margin', summary.lowest_acid_dew_margin_k),
+    lowest_water_dew_margin_k: governing('water_dew_margin', summary.lowest_water_dew_margin_k)!,
+    max_stress_indicator_mpa: governing('allowable_stress', stresses.length ? Math.max(...stresses) : null),
+    heat_loss_kwh_per_day: wide && dailyLoss.length > 0 ? round(dailyLoss.reduce((a, b) => a + b, 0) / dailyLoss.length, 2) : summary.heat_loss_kwh_per_day,
   };
 }
 

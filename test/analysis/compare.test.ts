@@ -1,6 +1,6 @@
 /** Comparing build-ups: the choice is the build-up that meets every limit at the least heat loss. */
 import { describe, it, expect } from 'vitest';
-import { compareBuildUps, comparisonCsv } from '../../src/analysis/compare.ts';
+import { compareBuildUps, comparisonCsv, comparisonRow } from '../../src/analysis/compare.ts';
 import type { Summary } from '../../src/analysis/summary.ts';
 import { demoStudy } from '../support/demoStudy.ts';
 
@@ -34,5 +34,24 @@ describe('compareBuildUps', () => {
     const csv = comparisonCsv(c).trimEnd().split('\n');
     expect(csv).toHaveLength(2);
     expect(csv[1]).toMatch(/^demo,50 mm dense-castable \| 40 mm calcium-silicate \| 8 mm carbon-steel,/);
+  });
+});
+
+describe('a row of a run judged over every day (several days, not periodic)', () => {
+  it('holds the figures the verdicts judged and the mean heat loss per day, not the last day alone', async () => {
+    const { runScenario } = await import('../../src/index.ts');
+    const { loadScenarioFile } = await import('../../src/input/scenario/load.ts');
+    const loaded = loadScenarioFile('scenarios/demo.yaml').inputs;
+    // the invented demo plant from a wall at 150 °C, two days: day 1 is the hotter one
+    const s = runScenario({ ...loaded, stack: { ...loaded.stack, segments: 3 }, run: { ...loaded.run, length: { kind: 'days', days: 2 }, outputInterval: 1800, initial: { kind: 'uniform', temperatureK: 423.15 }, accuracy: { kind: 'off' } } }).summary;
+    const row = comparisonRow(s);
+    const governing = (limit: string) => s.verdicts.find((v) => v.limit === limit)!.governing_value;
+    expect(row.peak_shell_c).toBe(governing('shell_touch'));
+    expect(row.peak_shell_c).toBeGreaterThan(s.peak_shell_c);
+    expect(row.lowest_acid_dew_margin_k).toBe(governing('acid_dew_margin'));
+    expect(row.max_stress_indicator_mpa).toBe(governing('allowable_stress'));
+    const days = s.daily.map((d) => d.heat_loss_kwh!);
+    expect(row.heat_loss_kwh_per_day).toBeCloseTo((days[0]! + days[1]!) / 2, 2);
+    expect(row.heat_loss_kwh_per_day).not.toBe(s.heat_loss_kwh_per_day);
   });
 });

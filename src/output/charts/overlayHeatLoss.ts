@@ -5,12 +5,14 @@ import { chartTypography, FONT_FAMILY, GRID, INK, VERDICT_BORDERS, VERDICT_COLOR
 import { niceBounds } from './scales.ts';
 import { axis, baseOptions } from './parts.ts';
 import type { OverlayCase, OverlayOptions } from './overlayParts.ts';
+import { comparisonRow } from '../../analysis/compare.ts';
 
 /** Net heat lost to the outside per day of each run as bars (dark: meets every limit; light with a dark red edge: a limit fails). */
 export function overlayHeatLoss(cases: readonly OverlayCase[], options: OverlayOptions = {}): ChartConfiguration {
   const f = chartTypography(options.width, options.height);
   const labels = cases.map((c) => c.label);
-  const loss = cases.map((c) => round(c.summary.heat_loss_kwh_per_day, 1));
+  // the figure the comparison ranks by (a year's mean day, not its last)
+  const loss = cases.map((c) => round(comparisonRow(c.summary).heat_loss_kwh_per_day, 1));
   const bars = (pass: boolean, label: string) => ({
     label,
     data: cases.map((c, i) => (c.summary.all_limits_pass === pass ? loss[i]! : null)),
