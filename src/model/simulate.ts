@@ -67,9 +67,6 @@ export interface SolveRefinement {
 /** The scenario's own mesh and tolerances. */
 export const NO_REFINEMENT: SolveRefinement = { mesh: 1, tolerance: 1 };
 
-/** Build the mesh, the drivers and the ODE system for the inputs (see assemble.ts). */
-export const prepareModel = assembleModel;
-
 /** Steps never exceed this, s: it bounds the dense output's interpolation error (O(h⁴)) on the daily wave. */
 const MAX_STEP_S = 3600;
 

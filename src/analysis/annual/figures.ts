@@ -10,14 +10,11 @@ import type { EnergyAccount, SeriesLayout } from '../../model/timeseries.ts';
 import { kelvinToCelsius as c } from '../../physics/constants.ts';
 import type { AnnualOutcome, CyclesAtHeight, HeightHours, MonthFigures, Verdict, WallCycles } from '../summary.ts';
 import { round } from '../rounding.ts';
+import { heatLossJ, J_PER_KWH } from '../metrics/energy.ts';
 import type { AnnualParts } from './recorder.ts';
 import type { SecondsBelow } from './dewHours.ts';
 import { CYCLE_GATE_K, governs, regroup, reportBinWidth, type ColumnCycles } from './cycles.ts';
 
-const J_PER_KWH = 3.6e6;
-
-/** Net heat lost to the outside over a day's account, J. */
-const heatLossJ = (e: EnergyAccount) => e.convectionJ + e.radiationJ - e.sunJ;
 
 /** Months `YYYY-MM` from the month of `first` to that of `last` (dates `YYYY-MM-DD`). Example: 2026-11-20 … 2027-01-05 → 2026-11, 2026-12, 2027-01. */
 export function monthsBetween(first: string, last: string): string[] {

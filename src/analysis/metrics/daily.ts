@@ -18,8 +18,8 @@ import { DaySplitter, type InstantSink, type InstantView } from '../../model/sin
 import type { EnergyAccount, SeriesLayout } from '../../model/timeseries.ts';
 import type { DayFigures } from '../summary.ts';
 import { round } from '../rounding.ts';
+import { heatLossJ, J_PER_KWH } from './energy.ts';
 
-const J_PER_KWH = 3.6e6;
 
 /** Running extremes of one day, K. */
 interface DayExtremes {
@@ -156,7 +156,7 @@ export class DailyExtremes implements InstantSink {
         inner_surface_max_c: round(c(x.innerMax)),
         lowest_water_dew_margin_k: round(x.waterMargin),
         lowest_acid_dew_margin_k: acid ? round(x.acidMargin) : null,
-        heat_loss_kwh: e ? round((e.convectionJ + e.radiationJ - e.sunJ) / J_PER_KWH) : null,
+        heat_loss_kwh: e ? round(heatLossJ(e) / J_PER_KWH) : null,
         gas_to_wall_kwh: e ? round(e.gasToWallJ / J_PER_KWH) : null,
       };
     });

@@ -7,7 +7,11 @@ import { SECONDS_PER_DAY } from '../../physics/constants.ts';
 import type { Summary } from '../summary.ts';
 import { round } from '../rounding.ts';
 
-const J_PER_KWH = 3.6e6;
+/** Joules in a kilowatt-hour. */
+export const J_PER_KWH = 3.6e6;
+
+/** Net heat lost to the outside over an account (convection and radiation out, sun absorbed in), J. */
+export const heatLossJ = (e: EnergyAccount): number => e.convectionJ + e.radiationJ - e.sunJ;
 
 /** Residual of the energy balance, %, above which a run is flagged. */
 const RESIDUAL_WARNING_PERCENT = 0.1;
@@ -21,7 +25,7 @@ export function evaluatedEnergy(result: RunResult, mode: 'cycle' | 'warmup'): En
 export function heatPerDay(e: EnergyAccount): Pick<Summary, 'heat_loss_kwh_per_day' | 'gas_to_wall_kwh_per_day' | 'sun_absorbed_kwh_per_day' | 'convection_kwh_per_day' | 'radiation_kwh_per_day' | 'energy_residual_percent'> {
   const perDay = (j: number) => round((j / J_PER_KWH) * (SECONDS_PER_DAY / e.periodS), 2);
   return {
-    heat_loss_kwh_per_day: perDay(e.convectionJ + e.radiationJ - e.sunJ),
+    heat_loss_kwh_per_day: perDay(heatLossJ(e)),
     gas_to_wall_kwh_per_day: perDay(e.gasToWallJ),
     sun_absorbed_kwh_per_day: perDay(e.sunJ),
     convection_kwh_per_day: perDay(e.convectionJ),

@@ -431,22 +431,3 @@ export function greatCircleDistanceKm(latADeg: number, lonADeg: number, latBDeg:
   const h = Math.sin(dLat / 2) ** 2 + Math.cos(latADeg * r) * Math.cos(latBDeg * r) * Math.sin(dLon / 2) ** 2;
   return 2 * EARTH_RADIUS_KM * Math.asin(Math.min(1, Math.sqrt(h)));
 }
-
-/**
- * Differences between a weather file's site and the scenario's site, as messages (empty when they
- * agree): a distance above `maxDistanceKm` (default 50 km), or a file UTC offset that is not the
- * standard offset of the scenario's time zone in `year`.
- */
-export function siteMismatches(
-  site: TypicalYearSite,
-  scenario: { readonly latitudeDeg: number; readonly longitudeDeg: number; readonly timeZone: string },
-  options: { readonly year: number; readonly maxDistanceKm?: number },
-): string[] {
-  const out: string[] = [];
-  const maxKm = options.maxDistanceKm ?? 50;
-  const km = greatCircleDistanceKm(site.latitudeDeg, site.longitudeDeg, scenario.latitudeDeg, scenario.longitudeDeg);
-  if (km > maxKm) out.push(`the weather file's site "${site.name}" (${site.latitudeDeg}°, ${site.longitudeDeg}°) is ${km.toFixed(0)} km from the scenario's site (more than ${maxKm} km)`);
-  const std = standardUtcOffsetHours(scenario.timeZone, options.year);
-  if (Math.abs(std - site.utcOffsetHours) > 1e-9) out.push(`the weather file's time is UTC${site.utcOffsetHours >= 0 ? '+' : ''}${site.utcOffsetHours} h, but the standard time of ${scenario.timeZone} is UTC${std >= 0 ? '+' : ''}${std} h`);
-  return out;
-}

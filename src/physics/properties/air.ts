@@ -167,10 +167,9 @@ export function airPropertiesAt(temperatureK: number, pressurePa: number = STAND
   );
 }
 
-/** ISO 2533 standard atmosphere, troposphere: sea-level temperature (K), lapse rate (K/m), top (geopotential m). */
+/** ISO 2533 standard atmosphere, troposphere: sea-level temperature (K), lapse rate (K/m). */
 const ISA_SEA_LEVEL_TEMPERATURE_K = 288.15;
 const ISA_LAPSE_RATE = 0.0065;
-const ISA_TROPOPAUSE_M = 11000;
 /** Earth radius used for geopotential altitude in ISO 2533 / US Standard Atmosphere 1976, m. */
 const ISA_EARTH_RADIUS_M = 6356766;
 
@@ -194,5 +193,3 @@ export function airPressureAtElevation(elevationM: number): number {
   return STANDARD_PRESSURE * Math.pow(1 - (ISA_LAPSE_RATE * h) / ISA_SEA_LEVEL_TEMPERATURE_K, exponent);
 }
 
-/** Top of the troposphere in the standard atmosphere, geopotential m (validity limit of `airPressureAtElevation`). */
-export const TROPOPAUSE_GEOPOTENTIAL_M = ISA_TROPOPAUSE_M;

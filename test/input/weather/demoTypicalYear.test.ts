@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseEpw } from '../../../src/input/weather/epw.ts';
-import { siteMismatches } from '../../../src/input/weather/typicalYear.ts';
+import { checkWeatherFileSite } from '../../../src/input/weather/weatherFile.ts';
 import { sunPosition } from '../../../src/physics/sun/position.ts';
 import { DEMO_FILE, makeTypicalYearEpw } from '../../../scripts/make-typical-year.ts';
 
@@ -24,7 +24,7 @@ describe('the demo typical year', () => {
 
   it('describes the invented demo site and says it is invented', () => {
     expect(src.site).toMatchObject({ name: 'Brennholm heating plant (invented)', latitudeDeg: 56.2, longitudeDeg: 10.1, elevationM: 35, utcOffsetHours: 1 });
-    expect(siteMismatches(src.site, { latitudeDeg: 56.2, longitudeDeg: 10.1, timeZone: 'Europe/Copenhagen' }, { year: 2026 })).toEqual([]);
+    expect(checkWeatherFileSite(src.site, { latitudeDeg: 56.2, longitudeDeg: 10.1, elevationM: 35, timeZone: 'Europe/Copenhagen' }, 2026)).toEqual({ errors: [], warnings: [] });
     const comments = text.split('\n').filter((l) => l.startsWith('COMMENTS'));
     expect(comments).toHaveLength(2);
     for (const c of comments) expect(c).toMatch(/INVENTED DATA/);

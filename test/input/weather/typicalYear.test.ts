@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { parseEpw } from '../../../src/input/weather/epw.ts';
 import { parseTmy3 } from '../../../src/input/weather/tmy3.ts';
 import { WeatherFileError } from '../../../src/input/weather/csvFile.ts';
-import { greatCircleDistanceKm, siteMismatches, standardUtcOffsetHours, stampOfRow } from '../../../src/input/weather/typicalYear.ts';
+import { greatCircleDistanceKm, standardUtcOffsetHours, stampOfRow } from '../../../src/input/weather/typicalYear.ts';
 import { epwYear, tmy3Year } from './typicalYearFiles.ts';
 
 const air = (k: number) => 10 + k / 1000; // °C, rises by 1 mK per row
@@ -160,11 +160,5 @@ describe('site checks against the scenario', () => {
     expect(standardUtcOffsetHours('Asia/Kolkata', 2026)).toBe(5.5);
   });
 
-  it('says when the file\'s site or time zone does not match the scenario', () => {
-    expect(siteMismatches(epw.site, { latitudeDeg: 56.2, longitudeDeg: 10.1, timeZone: 'Europe/Copenhagen' }, { year: 2026 })).toEqual([]);
-    const msgs = siteMismatches(epw.site, { latitudeDeg: 40, longitudeDeg: -80, timeZone: 'America/New_York' }, { year: 2026 });
-    expect(msgs).toHaveLength(2);
-    expect(msgs[0]).toMatch(/site "Invented Test Town" \(56\.25°, 10\.5°\) is \d+ km from the scenario's site \(more than 50 km\)/);
-    expect(msgs[1]).toMatch(/UTC\+1 h, but the standard time of America\/New_York is UTC-5 h/);
-  });
+  // (whether a file's site and time zone match the scenario: checkWeatherFileSite, weatherFile.test.ts)
 });
