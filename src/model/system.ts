@@ -135,6 +135,8 @@ export class StackWallSystem implements OdeSystem {
   /** Sector models: every node's capacity (rhs), the circumferential links and their conductances. */
   private readonly capacityAll: Float64Array;
   private readonly circumferential: CircumferentialLinks | null;
+  /** Scratch of the Jacobian: each circumferential link's conductance (sectors only). */
+  private readonly pairConductance: Float64Array;
   /** Atmospheric pressure at the site, Pa (outside air, air in gaps). */
   readonly sitePressurePa: number;
 
@@ -166,6 +168,7 @@ export class StackWallSystem implements OdeSystem {
     this.flueSectors = { heatPerMetre: new Float64Array(this.sectors), sinkPerMetre: new Float64Array(this.sectors) };
     this.capacityAll = new Float64Array(this.sectors > 1 ? this.size : 0);
     this.circumferential = this.sectors > 1 ? circumferentialLinks(mesh, this.sectors) : null;
+    this.pairConductance = new Float64Array(this.sectors > 1 ? this.size : 0);
     const flue = inputs.flue;
     this.flueSpec = {
       innerDiameter: geometry.innerDiameter,
@@ -443,11 +446,19 @@ export class StackWallSystem implements OdeSystem {
     const links = this.circumferential;
     const capacity = this.capacity;
     const ns = this.sectors;
+    // each circumferential link once: towards[col·n + i] joins node i of a column to its neighbour on the right
+    const towards = this.pairConductance;
+    if (links)
+      for (let col = 0; col < this.columns; col++) {
+        const o = col * n;
+        const right = (col - (col % ns) + ((col % ns) + 1) % ns) * n;
+        for (let i = 0; i < n; i++) towards[o + i] = links.conductance(i, 0.5 * (y[o + i]! + y[right + i]!));
+      }
     for (let col = 0; col < this.columns; col++) {
       const o = col * n;
       this.fillConductancesAndCapacities(y, o, capacity, 0);
+      // the link from the left is its left neighbour's link to the right
       const left = links ? (col - (col % ns) + ((col % ns) + ns - 1) % ns) * n : 0;
-      const right = links ? (col - (col % ns) + ((col % ns) + 1) % ns) * n : 0;
       for (let i = 0; i < n; i++) {
         const c = capacity[i]!;
         const gl = i > 0 ? this.conductance[i - 1]! : 0;
@@ -455,7 +466,7 @@ export class StackWallSystem implements OdeSystem {
         let dd = -(gl + gu);
         if (i === 0) dd -= this.innerSink[col]!;
         if (i === n - 1) dd -= this.outerSink[col]!;
-        if (links) dd -= ns * (links.conductance(i, 0.5 * (y[o + i]! + y[left + i]!)) + links.conductance(i, 0.5 * (y[o + i]! + y[right + i]!)));
+        if (links) dd -= ns * (towards[left + i]! + towards[o + i]!);
         lower[o + i] = i > 0 ? gl / c : 0;
         upper[o + i] = i < n - 1 ? gu / c : 0;
         diag[o + i] = dd / c;
