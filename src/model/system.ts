@@ -118,7 +118,6 @@ export class StackWallSystem implements OdeSystem {
   private readonly capTableB: Int32Array;
   /** Per column (W per metre of height, W/(m K)): heat from the gas, its sink −∂q′/∂T₀; convection, radiation, sun at the outer surface, and the sinks ∂q′/∂T_N. */
   private readonly innerSink: Float64Array;
-  private readonly outerSink: Float64Array;
   private readonly convectionSink: Float64Array;
   private readonly radiationSink: Float64Array;
   private readonly flueToWall: Float64Array;
@@ -158,7 +157,6 @@ export class StackWallSystem implements OdeSystem {
     this.capTableB = Int32Array.from(mesh.capMaterialB, (m) => (m ? this.tables.add(m.specificHeat) : -1));
     const perColumn = () => new Float64Array(this.columns);
     this.innerSink = perColumn();
-    this.outerSink = perColumn();
     this.convectionSink = perColumn();
     this.radiationSink = perColumn();
     this.flueToWall = perColumn();
@@ -318,7 +316,7 @@ export class StackWallSystem implements OdeSystem {
         this.flueToWall[s] = flue.heatPerMetre;
         this.innerSink[s] = flue.sinkPerMetre;
       } else {
-        flueSideOfSectors(this.flueSpec, gasIn, y, s * ns * n, n, ns, d.massFlow, flue, this.flueSectors);
+        flueSideOfSectors(this.flueSpec, gasIn, y, s * ns * n, n, ns, d.massFlow, flue, this.flueSectors, diag !== null);
         for (let j = 0; j < ns; j++) {
           this.flueToWall[s * ns + j] = ns * this.flueSectors.heatPerMetre[j]!;
           this.innerSink[s * ns + j] = ns * this.flueSectors.sinkPerMetre[j]!;
@@ -333,7 +331,6 @@ export class StackWallSystem implements OdeSystem {
         this.convectionOut[col] = outer.convectionPerMetre;
         this.radiationOut[col] = outer.radiationPerMetre;
         this.sunIn[col] = outer.sunPerMetre;
-        this.outerSink[col] = outer.sinkPerMetre;
         this.convectionSink[col] = outer.convectionSinkPerMetre;
         this.radiationSink[col] = outer.radiationSinkPerMetre;
         if (diag?.columns) {
@@ -465,7 +462,7 @@ export class StackWallSystem implements OdeSystem {
         const gu = i < n - 1 ? this.conductance[i]! : 0;
         let dd = -(gl + gu);
         if (i === 0) dd -= this.innerSink[col]!;
-        if (i === n - 1) dd -= this.outerSink[col]!;
+        if (i === n - 1) dd -= this.convectionSink[col]! + this.radiationSink[col]!;
         if (links) dd -= ns * (towards[left + i]! + towards[o + i]!);
         lower[o + i] = i > 0 ? gl / c : 0;
         upper[o + i] = i < n - 1 ? gu / c : 0;

@@ -179,7 +179,8 @@ const sectorFilm = emptyFlueSide();
  * T_w = Σ UA_j T_j / UA (the exact march for a well-mixed gas over walls at several temperatures with
  * one mean gas temperature), giving T_out and Q; the mean gas temperature T_m = T_w + Q/UA sets each
  * sector's share Q_j = UA_j (T_m − T_j), which sum to Q exactly.
- * `out` (segment-level diagnostics: the mean film, the gas leaving) and `sectors` are filled.
+ * `out` (the gas leaving, the segment's heat and sink; with `diagnostics`, also the film's
+ * diagnostics at the mean wall, which only reports need) and `sectors` are filled.
  */
 export function flueSideOfSectors(
   spec: FlueSideSpec,
@@ -191,6 +192,7 @@ export function flueSideOfSectors(
   massFlow: number,
   out: FlueSideOfSegment,
   sectors: FlueSideOfSectors,
+  diagnostics = true,
 ): FlueSideOfSegment {
   const di = spec.innerDiameter;
   const dz = spec.segmentLength;
@@ -210,7 +212,7 @@ export function flueSideOfSectors(
     radiationFilm += sectorFilm.radiationFilm / n;
   }
   const wallK = ua > 0 ? uaWall / ua : walls[offset]!;
-  insideFilmOfWall(spec, gas, gasInK, wallK, massFlow, out); // the diagnostics of the mean wall
+  if (diagnostics) insideFilmOfWall(spec, gas, gasInK, wallK, massFlow, out); // the diagnostics of the mean wall
   let total: number; // Q, W
   let sink: number; // −∂Q/∂T_w, W/K
   if (spec.gasCooling) {

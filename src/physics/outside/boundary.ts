@@ -110,9 +110,11 @@ export interface OuterBoundaryOfSegment {
   radiationPerMetre: number;
   /** Absorbed sun, W/m. */
   sunPerMetre: number;
-  /** ∂(convection + radiation)/∂T_surface, W/(m K), including the growth of natural convection with ΔT (for the Jacobian). */
-  sinkPerMetre: number;
-  /** The two parts of `sinkPerMetre`: h P and 4 ε σ T_s³ P (with its view factors). */
+  /**
+   * ∂(convection + radiation)/∂T_surface, W/(m K), in its two parts (their sum is the surface's
+   * sink, for the Jacobian): h P with the growth of natural convection with ΔT, and 4 ε σ T_s³ P
+   * (with its view factors).
+   */
   convectionSinkPerMetre: number;
   radiationSinkPerMetre: number;
   /** Outside film coefficient, W/(m² K). */
@@ -131,7 +133,7 @@ const filmResult: { -readonly [K in keyof OutsideFilmResult]: OutsideFilmResult[
 };
 
 export function emptyOuterBoundary(): OuterBoundaryOfSegment {
-  return { convectionPerMetre: 0, radiationPerMetre: 0, sunPerMetre: 0, sinkPerMetre: 0, convectionSinkPerMetre: 0, radiationSinkPerMetre: 0, filmCoefficient: 0, reynolds: Number.NaN, rayleigh: Number.NaN, grashof: Number.NaN, prandtl: Number.NaN, slenderCorrected: false };
+  return { convectionPerMetre: 0, radiationPerMetre: 0, sunPerMetre: 0, convectionSinkPerMetre: 0, radiationSinkPerMetre: 0, filmCoefficient: 0, reynolds: Number.NaN, rayleigh: Number.NaN, grashof: Number.NaN, prandtl: Number.NaN, slenderCorrected: false };
 }
 
 /**
@@ -174,7 +176,6 @@ export function outerBoundaryOfSegment(spec: OuterSurfaceSpec, surfaceK: number,
   out.convectionPerMetre = h * perimeter * (surfaceK - c.airTemperatureK);
   out.radiationPerMetre = radiation;
   out.sunPerMetre = c.sunPerMetre;
-  out.sinkPerMetre = (h + slopeExtra) * perimeter + radiationSink;
   out.convectionSinkPerMetre = (h + slopeExtra) * perimeter;
   out.radiationSinkPerMetre = radiationSink;
   out.filmCoefficient = h;
