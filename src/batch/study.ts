@@ -75,8 +75,24 @@ export function sweepStudy(axes: readonly SweepAxis[], points: readonly Pick<Swe
  * (ScenarioError) before anything runs.
  */
 export function sweepCases(file: string, points: readonly SweepPoint[]): ScenarioCase[] {
+  return casesOfBase(sweepBase(file), points);
+}
+
+/** A sweep's base scenario, read and validated once (throws ScenarioError for a file that cannot run). */
+export interface SweepBase {
+  readonly raw: unknown;
+  readonly baseDir: string;
+  readonly file: string;
+}
+
+export function sweepBase(file: string): SweepBase {
   const raw = readScenarioFile(file);
   const baseDir = dirname(resolve(file));
   validateCase({ name: 'base', raw, baseDir, file, overrides: [], problems: [] });
+  return { raw, baseDir, file };
+}
+
+/** The cases of `points` on a base already read and validated. */
+export function casesOfBase({ raw, baseDir, file }: SweepBase, points: readonly SweepPoint[]): ScenarioCase[] {
   return points.map((p) => ({ name: p.name, raw, baseDir, file, overrides: p.overrides, problems: [] }));
 }

@@ -14,7 +14,7 @@ import type { NotRun } from '../analysis/compare.ts';
 import { notRunLines, sizingSheet, sweepSheet } from '../output/designSheets.ts';
 import { writeArtefactsAtomically } from '../output/write.ts';
 import { checkReplaceable } from '../output/folder.ts';
-import { comparisonStudy, runBatch, sweepCases, sweepStudy, type SweepStudy } from '../batch/study.ts';
+import { casesOfBase, comparisonStudy, runBatch, sweepBase, sweepCases, sweepStudy, type SweepStudy } from '../batch/study.ts';
 import { CasePool, chooseThreads, runCasesSerially } from '../batch/pool.ts';
 import { holdsPlan, writePlan, SCENARIO_LIST } from '../batch/plan.ts';
 import { collectOutcomes, readManifest } from '../batch/collect.ts';
@@ -195,14 +195,14 @@ function sizingGrid(opts: SizeCommandOptions): { axis: SweepAxis; resolution: st
 export async function sizeCommand(file: string, opts: SizeCommandOptions): Promise<number> {
   const { axis, resolution } = sizingGrid(opts);
   const requested = parseThreads(opts.threads);
-  sweepCases(file, []); // the file itself must be valid before anything runs
+  const base = sweepBase(file); // the file itself must be valid before anything runs (read and checked once)
   if (opts.out) ensureWritable(resolve(opts.out));
   const expectedRuns = 2 + Math.ceil(Math.log2(Math.max(2, axis.values.length)));
   const threads = chooseThreads(expectedRuns, requested);
   const pool = threads > 1 ? new CasePool(threads) : null;
   const evaluate = async (values: readonly SweptValue[]): Promise<SizingProbe[]> => {
     const points = sweepPoints([{ ...axis, values }]);
-    const cases = sweepCases(file, points);
+    const cases = casesOfBase(base, points);
     const outcomes = pool ? await pool.run(cases) : await runCasesSerially(cases);
     return outcomes.map((o, i) => (o.status === 'ran' ? { value: values[i]!, status: 'ran', summary: o.summary } : { value: values[i]!, status: o.status, problems: o.problems }));
   };
