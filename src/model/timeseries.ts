@@ -169,3 +169,16 @@ export interface RunResult {
   /** Correlations used beyond their published range where the literature accepts it, once each. */
   readonly assumptions: readonly string[];
 }
+
+/**
+ * Temperature, K, of node i at instant k and segment seg: for a wall cut into sectors, that of
+ * sector `sector` when given, else the mean round the circumference.
+ */
+export function nodeTemperatureK(series: TimeSeries, k: number, seg: number, i: number, sector?: number): number {
+  const { segments: S, sectors: ns, nodes: N } = series;
+  if (ns === 1) return series.temperatureK[(k * S + seg) * N + i]!;
+  if (sector !== undefined) return series.temperatureK[((k * S + seg) * ns + sector) * N + i]!;
+  let sum = 0;
+  for (let j = 0; j < ns; j++) sum += series.temperatureK[((k * S + seg) * ns + j) * N + i]!;
+  return sum / ns;
+}

@@ -5,10 +5,9 @@
  * figures (3 decimals of °C and K, 4 of hours), so a run collected from its files draws exactly
  * the chart the same run draws in memory.
  */
-import type { TimeSeries } from '../model/timeseries.ts';
+import { nodeTemperatureK, type TimeSeries } from '../model/timeseries.ts';
 import { SECONDS_PER_DAY } from '../physics/constants.ts';
 import { celsius, clockHours, decimals, round } from './format.ts';
-import { nodeTemperatureK } from './charts/parts.ts';
 
 export interface RunTrace {
   /** Hours of the local day of each evaluated instant: clock time of the first, then elapsed time (4 decimals). */

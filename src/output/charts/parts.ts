@@ -140,18 +140,7 @@ export function lineDataset(label: string, data: Point[], look: LineLook, f: Typ
 
 type ReferenceLook = { readonly color: string; readonly dash: readonly number[] };
 
-/**
- * Temperature, K, of node i at instant k and segment seg: for a wall cut into sectors, that of
- * sector `sector` when given, else the mean round the circumference.
- */
-export function nodeTemperatureK(series: TimeSeries, k: number, seg: number, i: number, sector?: number): number {
-  const { segments: S, sectors: ns, nodes: N } = series;
-  if (ns === 1) return series.temperatureK[(k * S + seg) * N + i]!;
-  if (sector !== undefined) return series.temperatureK[((k * S + seg) * ns + sector) * N + i]!;
-  let sum = 0;
-  for (let j = 0; j < ns; j++) sum += series.temperatureK[((k * S + seg) * ns + j) * N + i]!;
-  return sum / ns;
-}
+export { nodeTemperatureK } from '../../model/timeseries.ts';
 
 /** A straight reference line between two points, without markers. */
 function referenceLine(label: string, from: Point, to: Point, look: ReferenceLook, f: Typography): ChartDataset<'line', Point[]> {
